@@ -1,0 +1,83 @@
+namespace SpecLint.Rules.Checking;
+
+/// <summary>
+/// Turns the paths given on the command line into spec files: files are taken as they are, folders are
+/// searched for files matching the include globs. Output order is ordinal by path so reports are stable.
+/// </summary>
+public static class SpecFileFinder
+{
+    private static readonly string[] SkippedFolders = [".git", "bin", "obj", "node_modules"];
+
+    /// <summary>Expands <paramref name="paths"/>; paths that do not exist are returned in <paramref name="missing"/>.</summary>
+    public static IReadOnlyList<string> Find(IEnumerable<string> paths, IReadOnlyList<string> includeGlobs, out IReadOnlyList<string> missing)
+    {
+        var globs = includeGlobs.Select(g => new GlobPattern(g)).ToList();
+        var files = new SortedSet<string>(StringComparer.Ordinal);
+        var gone = new List<string>();
+        foreach (var path in paths)
+        {
+            if (File.Exists(path))
+            {
+                files.Add(Normalize(path));
+            }
+            else if (Directory.Exists(path))
+            {
+                foreach (var f in Walk(path))
+                {
+                    var relative = Path.GetRelativePath(path, f).Replace('\\', '/');
+                    if (globs.Any(g => g.IsMatch(relative)))
+                    {
+                        files.Add(Normalize(f));
+                    }
+                }
+            }
+            else
+            {
+                gone.Add(path);
+            }
+        }
+
+        missing = gone;
+        return files.ToList();
+    }
+
+    private static IEnumerable<string> Walk(string root)
+    {
+        var pending = new Stack<string>();
+        pending.Push(root);
+        while (pending.Count > 0)
+        {
+            var dir = pending.Pop();
+            IEnumerable<string> entries;
+            try
+            {
+                entries = Directory.EnumerateFileSystemEntries(dir).ToList();
+            }
+            catch (UnauthorizedAccessException)
+            {
+                continue;
+            }
+
+            foreach (var e in entries)
+            {
+                if (Directory.Exists(e))
+                {
+                    if (!SkippedFolders.Contains(Path.GetFileName(e), StringComparer.Ordinal))
+                    {
+                        pending.Push(e);
+                    }
+                }
+                else
+                {
+                    yield return e;
+                }
+            }
+        }
+    }
+
+    private static string Normalize(string path)
+    {
+        var relative = Path.GetRelativePath(Directory.GetCurrentDirectory(), Path.GetFullPath(path));
+        return (relative.StartsWith("..", StringComparison.Ordinal) ? Path.GetFullPath(path) : relative).Replace('\\', '/');
+    }
+}

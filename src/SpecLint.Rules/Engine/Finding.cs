@@ -1,0 +1,29 @@
+namespace SpecLint.Rules.Engine;
+
+/// <summary>One problem found in one spec, located at the key that drives it.</summary>
+/// <param name="RuleId">The rule that reported it.</param>
+/// <param name="Severity">Its severity after configuration.</param>
+/// <param name="File">The spec file as given on the command line.</param>
+/// <param name="Pointer">JSON Pointer of the key the finding is about.</param>
+/// <param name="Line">1-based line.</param>
+/// <param name="Column">1-based column.</param>
+/// <param name="Message">The measured figure, the limit and what to do, in plain words.</param>
+/// <param name="Fix">A re-checked replacement value, when the rule can name one.</param>
+/// <param name="Waived">True when a live waiver in the spec covers it.</param>
+/// <param name="WaiverReason">The waiver's reason, when waived.</param>
+public sealed record Finding(
+    string RuleId,
+    Severity Severity,
+    string File,
+    string Pointer,
+    int Line,
+    int Column,
+    string Message,
+    FixSuggestion? Fix = null,
+    bool Waived = false,
+    string? WaiverReason = null)
+{
+    /// <summary>The terminal form of DESIGN §6: <c>file:line:col: severity rule-id: message</c>.</summary>
+    public override string ToString() =>
+        $"{File}:{Line}:{Column}: {Severity.Name()} {RuleId}: {Message}{(Waived ? " (waived: " + WaiverReason + ")" : "")}";
+}

@@ -1,0 +1,54 @@
+using SpecLint.Core.Spec.Model;
+using SpecLint.Core.Units;
+
+namespace SpecLint.Rules.Engine;
+
+/// <summary>
+/// What a rule sees while it checks one spec: the typed spec, its analysis, its options, and helpers to
+/// report findings at the right line. Built-in rules and house rules get exactly this.
+/// </summary>
+public sealed partial class RuleContext
+{
+    private readonly RuleDescriptor _descriptor;
+    private readonly RuleConfiguration _configuration;
+    private readonly Func<string, RuleConfiguration> _configurationOf;
+
+    /// <summary>Creates a context for one rule and one spec.</summary>
+    public RuleContext(TiaSpec spec, RuleDescriptor descriptor, RuleConfiguration configuration, Func<string, RuleConfiguration>? configurationOf = null)
+    {
+        Spec = spec ?? throw new ArgumentNullException(nameof(spec));
+        _descriptor = descriptor ?? throw new ArgumentNullException(nameof(descriptor));
+        _configuration = configuration ?? RuleConfiguration.Default;
+        _configurationOf = configurationOf ?? (_ => RuleConfiguration.Default);
+    }
+
+    /// <summary>The spec under check.</summary>
+    public TiaSpec Spec { get; }
+
+    /// <summary>The value of one of this rule's options in SI: the configured value, or the declared default.</summary>
+    public double OptionSi(string key) => OptionSi(_descriptor, _configuration, key);
+
+    /// <summary>The value of one of this rule's options as a typed quantity.</summary>
+    public T Option<T>(string key)
+        where T : struct, IQuantity<T> => T.FromSi(OptionSi(key));
+
+    /// <summary>The value of another rule's option (for rules that share a threshold, such as the phase-margin floor).</summary>
+    public T OptionOf<T>(RuleDescriptor other, string key)
+        where T : struct, IQuantity<T> => T.FromSi(OptionSi(other, _configurationOf(other.Id), key));
+
+    /// <summary>Creates a finding at the key <paramref name="pointer"/> (or its nearest written ancestor).</summary>
+    public Finding Report(string pointer, string message, FixSuggestion? fix = null, Severity? severity = null)
+    {
+        var at = Spec.Locations.Locate(pointer);
+        return new Finding(_descriptor.Id, severity ?? _descriptor.DefaultSeverity, Spec.File, pointer, at.Line, at.Column, message, fix);
+    }
+
+    private static double OptionSi(RuleDescriptor descriptor, RuleConfiguration configuration, string key)
+    {
+        var option = descriptor.Options.FirstOrDefault(o => o.Key == key)
+            ?? throw new ArgumentException($"rule '{descriptor.Id}' declares no option '{key}'", nameof(key));
+        return configuration.Options.TryGetValue(key, out var text)
+            ? QuantityParser.ParseSingle(text, option.Dimension)
+            : option.DefaultSi;
+    }
+}

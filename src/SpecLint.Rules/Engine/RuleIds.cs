@@ -1,0 +1,26 @@
+namespace SpecLint.Rules.Engine;
+
+/// <summary>
+/// Ids the engine itself reports under (the rules' ids live on their descriptors). Ids are what users type
+/// in waivers and configuration: once published, never reuse or rename one.
+/// </summary>
+public static class RuleIds
+{
+    /// <summary>A spec file that cannot be read: YAML syntax, schema, units (DESIGN §7).</summary>
+    public const string SpecInvalid = "spec-invalid";
+
+    /// <summary>A repository configuration file that cannot be read.</summary>
+    public const string ConfigInvalid = "config-invalid";
+
+    /// <summary>A waiver whose expiry date has passed (DESIGN §7).</summary>
+    public const string WaiverExpired = "waiver-expired";
+
+    /// <summary>A live waiver that matched no finding: probably stale.</summary>
+    public const string WaiverUnmatched = "waiver-unmatched";
+
+    /// <summary>The analysis could not produce a result for a spec (a numerical failure, reported, not thrown).</summary>
+    public const string AnalysisFailed = "analysis-failed";
+
+    /// <summary>All engine ids.</summary>
+    public static IReadOnlyList<string> EngineIds { get; } = [SpecInvalid, ConfigInvalid, WaiverExpired, WaiverUnmatched, AnalysisFailed];
+}
