@@ -1,0 +1,3 @@
+using SpecLint.Cli;
+
+return SpecLintApp.Run(args, Console.Out, Console.Error);

@@ -1,0 +1,158 @@
+using System.Text;
+using System.Text.Encodings.Web;
+using System.Text.Json;
+using SpecLint.Core.Analysis;
+using SpecLint.Rules.Checking;
+using SpecLint.Rules.Engine;
+
+namespace SpecLint.Reporting.Json;
+
+/// <summary>
+/// The machine-readable output of DESIGN §5. Field names are a contract: extend, never rename. Written
+/// with a forward-only writer so key order and number formatting are identical on every run.
+/// </summary>
+public static class JsonReport
+{
+    /// <summary>The JSON document for a run, indented, with a trailing newline.</summary>
+    public static string Write(CheckRun run)
+    {
+        ArgumentNullException.ThrowIfNull(run);
+        using var buffer = new MemoryStream();
+        using (var w = new Utf8JsonWriter(buffer, new JsonWriterOptions { Indented = true, Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping }))
+        {
+            w.WriteStartObject();
+            w.WriteNumber("version", 1);
+            w.WriteStartArray("specs");
+            foreach (var spec in run.Specs)
+            {
+                WriteSpec(w, spec);
+            }
+
+            w.WriteEndArray();
+            w.WriteStartArray("problems");
+            foreach (var f in run.RunProblems)
+            {
+                WriteFinding(w, f);
+            }
+
+            w.WriteEndArray();
+            w.WriteString("failOn", run.FailOn.Name());
+            w.WriteNumber("exitCode", run.ExitCode);
+            w.WriteEndObject();
+        }
+
+        return Encoding.UTF8.GetString(buffer.ToArray()) + "\n";
+    }
+
+    private static void WriteSpec(Utf8JsonWriter w, SpecOutcome spec)
+    {
+        w.WriteStartObject();
+        w.WriteString("file", spec.File);
+        w.WriteString("name", spec.Spec?.Name);
+        if (spec.Analysis is { } a)
+        {
+            WriteMetrics(w, a);
+        }
+        else
+        {
+            w.WriteNull("metrics");
+        }
+
+        CornersJson.Write(w, spec);
+        w.WriteStartArray("findings");
+        foreach (var f in spec.Findings)
+        {
+            WriteFinding(w, f);
+        }
+
+        w.WriteEndArray();
+        w.WriteEndObject();
+    }
+
+    private static void WriteMetrics(Utf8JsonWriter w, AnalysisResult a)
+    {
+        w.WriteStartObject("metrics");
+        w.WriteNumber("transimpedanceOhm", a.Transimpedance.Ohms);
+        Nullable(w, "bandwidthHz", a.Bandwidth?.Hertz);
+        Nullable(w, "phaseMarginDeg", a.PhaseMargin?.Degrees);
+        Nullable(w, "crossoverHz", a.Crossover?.Hertz);
+        w.WriteNumber("peakingDb", a.PeakingDb);
+        Nullable(w, "noiseGainHighFrequency", double.IsFinite(a.NoiseGainHighFrequency) ? a.NoiseGainHighFrequency : null);
+        Nullable(w, "outputNoiseRmsV", a.Noise?.OutputRms.Volts);
+        Nullable(w, "inputNoiseRmsA", a.Noise?.InputRms.Amperes);
+        if (a.Noise is { } n)
+        {
+            w.WriteStartArray("noiseBandHz");
+            w.WriteNumberValue(n.BandLow.Hertz);
+            w.WriteNumberValue(n.BandHigh.Hertz);
+            w.WriteEndArray();
+        }
+        else
+        {
+            w.WriteNull("noiseBandHz");
+        }
+
+        w.WriteNumber("outputMinV", a.Output.Min.Volts);
+        w.WriteNumber("outputMaxV", a.Output.Max.Volts);
+
+        // Extensions beyond the contract.
+        w.WriteNumber("loopGainDc", a.LoopGainDc);
+        w.WriteNumber("shotToRfThermalRatio", a.ShotToRfThermalRatio);
+        Nullable(w, "noiseTemperatureK", a.Noise?.Temperature.Kelvin);
+        Nullable(w, "snrAtMinimumDb", a.Noise?.SnrAtMinimumDb);
+        Nullable(w, "noiseEquivalentPowerW", a.Noise?.NoiseEquivalentPower?.Watts);
+        w.WriteNumber("headroomLowV", a.Output.HeadroomLow.Volts);
+        w.WriteNumber("headroomHighV", a.Output.HeadroomHigh.Volts);
+        w.WriteStartArray("crossings");
+        foreach (var c in a.Crossings)
+        {
+            w.WriteStartObject();
+            w.WriteNumber("frequencyHz", c.Frequency.Hertz);
+            w.WriteString("direction", c.Direction.ToString().ToLowerInvariant());
+            w.WriteNumber("phaseDeg", c.Phase.Degrees);
+            w.WriteEndObject();
+        }
+
+        w.WriteEndArray();
+        w.WriteEndObject();
+    }
+
+    internal static void WriteFinding(Utf8JsonWriter w, Finding f)
+    {
+        w.WriteStartObject();
+        w.WriteString("rule", f.RuleId);
+        w.WriteString("severity", f.Severity.Name());
+        w.WriteString("message", f.Message);
+        w.WriteString("file", f.File);
+        w.WriteNumber("line", f.Line);
+        w.WriteNumber("column", f.Column);
+        w.WriteString("pointer", f.Pointer);
+        if (f.Fix is { } fix)
+        {
+            w.WriteStartObject("fix");
+            w.WriteString("path", fix.Path);
+            w.WriteString("value", fix.Value);
+            w.WriteEndObject();
+        }
+
+        w.WriteBoolean("waived", f.Waived);
+        if (f.WaiverReason is not null)
+        {
+            w.WriteString("waiverReason", f.WaiverReason);
+        }
+
+        w.WriteEndObject();
+    }
+
+    internal static void Nullable(Utf8JsonWriter w, string name, double? value)
+    {
+        if (value is { } v && double.IsFinite(v))
+        {
+            w.WriteNumber(name, v);
+        }
+        else
+        {
+            w.WriteNull(name);
+        }
+    }
+}

@@ -1,0 +1,36 @@
+using System.Collections.Immutable;
+using SpecLint.Rules.Engine;
+
+namespace SpecLint.Rules.Checking;
+
+/// <summary>The result of one <c>check</c>: every spec's outcome plus problems outside any spec.</summary>
+/// <param name="Specs">Outcomes in file order.</param>
+/// <param name="RunProblems">Findings that belong to no spec: configuration errors, paths that do not exist.</param>
+/// <param name="FailOn">The lowest severity that fails the run.</param>
+/// <param name="ConfigFiles">The configuration files used (for the report's run context).</param>
+public sealed record CheckRun(
+    ImmutableArray<SpecOutcome> Specs,
+    ImmutableArray<Finding> RunProblems,
+    Severity FailOn,
+    ImmutableArray<string> ConfigFiles)
+{
+    /// <summary>Every finding of the run, spec findings first.</summary>
+    public IEnumerable<Finding> AllFindings => Specs.SelectMany(s => s.Findings).Concat(RunProblems);
+
+    /// <summary>
+    /// DESIGN §5: 2 when any input was unusable (other files were still checked), 1 when an unwaived
+    /// finding is at or above the fail level, 0 otherwise.
+    /// </summary>
+    public int ExitCode
+    {
+        get
+        {
+            if (!RunProblems.IsEmpty || Specs.Any(s => s.IsUnusable))
+            {
+                return ExitCodes.UnusableInput;
+            }
+
+            return AllFindings.Any(f => !f.Waived && f.Severity >= FailOn) ? ExitCodes.FindingsAtFailLevel : ExitCodes.Clean;
+        }
+    }
+}

@@ -1,0 +1,32 @@
+using System.Collections.Immutable;
+using SpecLint.Core.Analysis;
+using SpecLint.Core.Analysis.Tolerance;
+using SpecLint.Core.Spec.Model;
+using SpecLint.Rules.Engine;
+
+namespace SpecLint.Rules.Checking;
+
+/// <summary>Everything a run learned about one spec file: the spec (when it loaded), its analysis and its findings.</summary>
+/// <param name="File">The file as given or found, forward slashes.</param>
+/// <param name="Spec">The typed spec, or null when the file could not be read.</param>
+/// <param name="Circuit">The nominal operating point, or null.</param>
+/// <param name="Analysis">The nominal analysis with noise, or null.</param>
+/// <param name="Tolerances">Corners and Monte Carlo, or null when nothing varies or the analysis did not run.</param>
+/// <param name="Findings">Findings ordered by line, column and rule id.</param>
+public sealed record SpecOutcome(
+    string File,
+    TiaSpec? Spec,
+    Circuit? Circuit,
+    AnalysisResult? Analysis,
+    ToleranceResult? Tolerances,
+    ImmutableArray<Finding> Findings)
+{
+    /// <summary>The spec's name, or the file name when it did not load.</summary>
+    public string Name => Spec?.Name ?? Path.GetFileName(File);
+
+    /// <summary>True when the file itself was unusable (spec-invalid).</summary>
+    public bool IsUnusable => Spec is null || Findings.Any(f => f.RuleId == RuleIds.SpecInvalid);
+
+    /// <summary>The highest severity among unwaived findings, or null when there are none.</summary>
+    public Severity? WorstSeverity => Findings.Where(f => !f.Waived).Select(f => (Severity?)f.Severity).Max();
+}
