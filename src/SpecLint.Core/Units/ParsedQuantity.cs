@@ -9,6 +9,9 @@ namespace SpecLint.Core.Units;
 /// <param name="HasTypical">False for a range written without a typical value.</param>
 public sealed record ParsedQuantity(Dimension Dimension, double Typ, double Min, double Max, ToleranceForm Form, bool HasTypical = true)
 {
+    /// <summary>The tolerance as written after the value (e.g. "±5%", "C", "+10%/-20%"), or null; fix suggestions keep it.</summary>
+    public string? ToleranceText { get; init; }
+
     /// <summary>An exact value with no spread.</summary>
     public static ParsedQuantity Exact(Dimension dimension, double value) => new(dimension, value, value, value, ToleranceForm.None);
 }

@@ -111,6 +111,12 @@ public static partial class QuantityParser
             return ParsedQuantity.Exact(dimension, typ);
         }
 
+        return ParseTolerance(text, typ, tolerance, dimension) with { ToleranceText = tolerance };
+    }
+
+    private static ParsedQuantity ParseTolerance(string text, double typ, string tolerance, Dimension dimension)
+    {
+
         var letter = LetterRegex().Match(tolerance);
         if (letter.Success)
         {

@@ -1,3 +1,5 @@
+using SpecLint.Core.Analysis;
+using SpecLint.Core.Analysis.Tolerance;
 using SpecLint.Core.Spec.Model;
 using SpecLint.Core.Units;
 
@@ -13,17 +15,41 @@ public sealed partial class RuleContext
     private readonly RuleConfiguration _configuration;
     private readonly Func<string, RuleConfiguration> _configurationOf;
 
-    /// <summary>Creates a context for one rule and one spec.</summary>
-    public RuleContext(TiaSpec spec, RuleDescriptor descriptor, RuleConfiguration configuration, Func<string, RuleConfiguration>? configurationOf = null)
+    private readonly ISpecAnalyzer _analyzer;
+
+    /// <summary>Creates a context for one rule and one analysed spec.</summary>
+    public RuleContext(
+        SpecAnalysis analysis,
+        ISpecAnalyzer analyzer,
+        RuleDescriptor descriptor,
+        RuleConfiguration configuration,
+        Func<string, RuleConfiguration>? configurationOf = null)
     {
-        Spec = spec ?? throw new ArgumentNullException(nameof(spec));
+        Current = analysis ?? throw new ArgumentNullException(nameof(analysis));
+        _analyzer = analyzer ?? throw new ArgumentNullException(nameof(analyzer));
         _descriptor = descriptor ?? throw new ArgumentNullException(nameof(descriptor));
         _configuration = configuration ?? RuleConfiguration.Default;
         _configurationOf = configurationOf ?? (_ => RuleConfiguration.Default);
     }
 
+    /// <summary>The spec with its analysis.</summary>
+    public SpecAnalysis Current { get; }
+
     /// <summary>The spec under check.</summary>
-    public TiaSpec Spec { get; }
+    public TiaSpec Spec => Current.Spec;
+
+    /// <summary>The nominal operating point.</summary>
+    public Circuit Circuit => Current.Circuit;
+
+    /// <summary>Nominal results; noise at the hottest temperature.</summary>
+    public AnalysisResult Analysis => Current.Analysis;
+
+    /// <summary>Tolerance corners and Monte Carlo, or null when nothing in the spec varies.</summary>
+    public ToleranceResult? Tolerances => Current.Tolerances;
+
+    /// <summary>Analyses a changed spec, the way a rule re-checks a fix before suggesting it.</summary>
+    public SpecAnalysis Reanalyze(TiaSpec changed, bool includeNoise = false) =>
+        _analyzer.Analyze(changed, includeNoise, includeCorners: Current.Tolerances is not null);
 
     /// <summary>The value of one of this rule's options in SI: the configured value, or the declared default.</summary>
     public double OptionSi(string key) => OptionSi(_descriptor, _configuration, key);

@@ -50,33 +50,6 @@ public static class WaiverApplication
         return result;
     }
 
-    private static string DidYouMean(string id, IEnumerable<string> known)
-    {
-        var best = known.Select(k => (k, d: EditDistance(k, id))).OrderBy(x => x.d).ThenBy(x => x.k, StringComparer.Ordinal).FirstOrDefault();
-        return best.k is not null && best.d <= Math.Max(2, id.Length / 3) ? $" (did you mean '{best.k}'?)" : "";
-    }
-
-    private static int EditDistance(string a, string b)
-    {
-        var d = new int[a.Length + 1, b.Length + 1];
-        for (var i = 0; i <= a.Length; i++)
-        {
-            d[i, 0] = i;
-        }
-
-        for (var j = 0; j <= b.Length; j++)
-        {
-            d[0, j] = j;
-        }
-
-        for (var i = 1; i <= a.Length; i++)
-        {
-            for (var j = 1; j <= b.Length; j++)
-            {
-                d[i, j] = Math.Min(Math.Min(d[i - 1, j] + 1, d[i, j - 1] + 1), d[i - 1, j - 1] + (a[i - 1] == b[j - 1] ? 0 : 1));
-            }
-        }
-
-        return d[a.Length, b.Length];
-    }
+    private static string DidYouMean(string id, IEnumerable<string> known) =>
+        Checking.Suggest.Closest(id, known) is { } s ? $" (did you mean '{s}'?)" : "";
 }

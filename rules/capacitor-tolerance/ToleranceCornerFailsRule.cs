@@ -1,0 +1,71 @@
+using System.Globalization;
+using System.Text.RegularExpressions;
+using SpecLint.Core.Units;
+using SpecLint.Rules.Engine;
+using SpecLint.Rules.Fixes;
+
+namespace SpecLint.Rules.BuiltIn;
+
+/// <summary>
+/// Flags a design whose phase-margin floor or bandwidth requirement fails at the worst corner of its part
+/// tolerances and temperature, and any class 2 dielectric in the feedback path.
+/// </summary>
+public sealed partial class ToleranceCornerFailsRule : IRule
+{
+    /// <summary>The descriptor.</summary>
+    public static RuleDescriptor Info { get; } = new(
+        "capacitor-tolerance", "The phase-margin floor and bandwidth still hold at the worst corner of part tolerances and temperature; no class 2 dielectric in the feedback path", Severity.Error);
+
+    /// <inheritdoc />
+    public RuleDescriptor Descriptor => Info;
+
+    // EIA class 2 codes: low temperature letter, high temperature digit, change letter (X7R, X5R, Y5V, Z5U, X8R, ...).
+    [GeneratedRegex("^[XYZ][4-9][P-V]$", RegexOptions.CultureInvariant)]
+    private static partial Regex ClassTwoCode();
+
+    /// <inheritdoc />
+    public IEnumerable<Finding> Check(RuleContext context)
+    {
+        ArgumentNullException.ThrowIfNull(context);
+        var spec = context.Spec;
+        if (spec.Feedback.Dielectric is { } d && ClassTwoCode().IsMatch(d.ToUpperInvariant()))
+        {
+            yield return context.Report("/feedback/dielectric",
+                $"the feedback capacitor is {d}, a class 2 dielectric: its capacitance moves with temperature (±15 % for X7R, +22/−82 % for Y5V), DC bias and age, so the compensation moves with it. Use C0G/NP0 (±30 ppm/K).",
+                new FixSuggestion("/feedback/dielectric", "C0G"), Severity.Warning);
+        }
+
+        if (context.Tolerances is not { } t)
+        {
+            yield break;
+        }
+
+        var floor = PhaseMarginBelowFloorRule.FloorFor(context);
+        var required = spec.Requirements.Bandwidth;
+        var pmFails = t.PhaseMarginMin is null || t.PhaseMarginMin.Value.Degrees < floor.Degrees;
+        var bwFails = required is { } req && t.BandwidthMin is { } bmin && bmin.Hertz < req.Hertz;
+        if (!pmFails && !bwFails)
+        {
+            yield break;
+        }
+
+        var parts = new List<string>();
+        if (pmFails)
+        {
+            var pm = t.PhaseMarginMin is { } m ? string.Create(CultureInfo.InvariantCulture, $"{m.Degrees:0.0}°") : "undefined";
+            parts.Add(string.Create(CultureInfo.InvariantCulture, $"phase margin falls to {pm} (floor {floor.Degrees:0.#}°) at {t.PhaseMarginMinAt.Describe()}"));
+        }
+
+        if (bwFails)
+        {
+            parts.Add($"bandwidth falls to {Fmt.Hz(t.BandwidthMin)} (required {Fmt.Hz(required)}) at {t.BandwidthMinAt.Describe()}");
+        }
+
+        var fix = CfForFloor.Find(context, floor, r => required is not { } q || (r.WorstBandwidthHz is { } w && w >= q.Hertz));
+        var advice = fix is { } f
+            ? $" Cf = {f.Value} holds both at every corner (re-checked); tighter tolerances on the dominant parts also help."
+            : " No standard Cf meets both at every corner: tighten the tolerances named above, use a C0G capacitor, or choose an op-amp with a tighter GBW spread.";
+        yield return context.Report(spec.Feedback.Capacitance is null ? "/feedback" : "/feedback/capacitance",
+            "with the part tolerances and temperature range, " + string.Join("; ", parts) + "." + advice, fix);
+    }
+}

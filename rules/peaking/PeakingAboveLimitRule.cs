@@ -1,0 +1,57 @@
+using System.Globalization;
+using SpecLint.Core.Units;
+using SpecLint.Rules.Engine;
+using SpecLint.Rules.Fixes;
+
+namespace SpecLint.Rules.BuiltIn;
+
+/// <summary>Flags closed-loop transimpedance peaking above the limit, at nominal or at the worst corner.</summary>
+public sealed class PeakingAboveLimitRule : IRule
+{
+    /// <summary>The largest acceptable peaking.</summary>
+    public static readonly RuleOption Max = new("max", Dimension.Gain, "1 dB", "largest acceptable peaking; requirements.peaking overrides it");
+
+    /// <summary>The descriptor.</summary>
+    public static RuleDescriptor Info { get; } = new(
+        "peaking", "Gain peaking of the transimpedance stays within the limit", Severity.Warning, [Max]);
+
+    /// <inheritdoc />
+    public RuleDescriptor Descriptor => Info;
+
+    /// <inheritdoc />
+    public IEnumerable<Finding> Check(RuleContext context)
+    {
+        ArgumentNullException.ThrowIfNull(context);
+        var limitDb = context.Spec.Requirements.PeakingDb ?? context.Option<Gain>(Max.Key).Decibels;
+        var nominal = context.Analysis.PeakingDb;
+        var worst = Math.Max(nominal, context.Tolerances?.PeakingDbMax ?? double.NegativeInfinity);
+        if (worst <= limitDb + 1e-9 || context.Analysis.PhaseMargin is null)
+        {
+            yield break;
+        }
+
+        var where = nominal > limitDb
+            ? string.Create(CultureInfo.InvariantCulture, $"{nominal:0.0} dB at nominal (at {Fmt.Hz(context.Analysis.PeakFrequency)})")
+            : string.Create(CultureInfo.InvariantCulture, $"{nominal:0.0} dB at nominal but {worst:0.0} dB at {context.Tolerances!.PeakingMaxAt.Describe()}");
+        var fix = SmallestCfWithin(context, limitDb);
+        var advice = fix is { } c
+            ? $" Cf = {SpecEdits.CfText(context.Spec, c)} keeps it within the limit (re-checked)."
+            : " No standard Cf brings it within the limit.";
+        yield return context.Report(context.Spec.Feedback.Capacitance is null ? "/feedback" : "/feedback/capacitance",
+            string.Create(CultureInfo.InvariantCulture, $"the transimpedance peaks {where}, above the {limitDb:0.#} dB limit: steps overshoot and noise near the peak is amplified.") + advice,
+            fix is { } v ? new FixSuggestion("/feedback/capacitance", SpecEdits.CfText(context.Spec, v)) : null);
+    }
+
+    private static Capacitance? SmallestCfWithin(RuleContext context, double limitDb)
+    {
+        var start = context.Circuit.Cf.Farads > 0 ? context.Circuit.Cf.Farads : 0.1e-12;
+        var series = StandardValueSearch.SeriesFor(context.Spec.Feedback.Capacitance, ESeries.E12);
+        var found = StandardValueSearch.Find(series, start, upward: true, candidate =>
+        {
+            var r = context.Reanalyze(SpecEdits.WithCf(context.Spec, new Capacitance(candidate)));
+            var peak = Math.Max(r.Analysis.PeakingDb, r.Tolerances?.PeakingDbMax ?? double.NegativeInfinity);
+            return peak <= limitDb;
+        }, steps: 24);
+        return found is { } f ? new Capacitance(f) : null;
+    }
+}

@@ -1,0 +1,56 @@
+using System.Globalization;
+using SpecLint.Core.Analysis;
+using SpecLint.Core.Units;
+using SpecLint.Rules.Engine;
+using SpecLint.Rules.Fixes;
+
+namespace SpecLint.Rules.BuiltIn;
+
+/// <summary>Flags an Rf whose thermal noise exceeds the shot noise of the smallest signal (Imin·Rf &lt; 2kT/q).</summary>
+public sealed class RfThermalNoiseDominatesRule : IRule
+{
+    /// <summary>The smallest acceptable Imin·Rf/(2kT/q).</summary>
+    public static readonly RuleOption MinRatio = new("min-ratio", Dimension.Ratio, "1", "smallest acceptable Imin·Rf/(2kT/q)");
+
+    /// <summary>The descriptor.</summary>
+    public static RuleDescriptor Info { get; } = new(
+        "thermal-vs-shot-noise", "Rf's thermal noise stays below the shot noise of the smallest signal", Severity.Warning, [MinRatio]);
+
+    /// <inheritdoc />
+    public RuleDescriptor Descriptor => Info;
+
+    /// <inheritdoc />
+    public IEnumerable<Finding> Check(RuleContext context)
+    {
+        ArgumentNullException.ThrowIfNull(context);
+        var spec = context.Spec;
+        var minRatio = context.OptionSi(MinRatio.Key);
+        var hottest = spec.Conditions.Hottest;
+        var ratio = context.Analysis.ShotToRfThermalRatio;
+        if (ratio >= minRatio || spec.Input.CurrentMin.Amperes <= 0)
+        {
+            yield break;
+        }
+
+        var twoKtq = PhysicalConstants.ThermalVoltage(hottest) * 2;
+        var needed = DesignHelpers.MinRfForShotNoiseLimit(spec.Input.CurrentMin, hottest).Ohms * minRatio;
+        var span = OutputOutsideRailsRule.UsableSpan(context);
+        var series = StandardValueSearch.SeriesFor<Resistance>(spec.Feedback.Resistance, ESeries.E96);
+        var found = StandardValueSearch.Find(series, needed, upward: true, candidate =>
+            OutputOutsideRailsRule.Fits(context.Reanalyze(SpecEdits.WithRf(spec, new Resistance(candidate))).Analysis.Output, span), steps: 1);
+        var message = string.Create(CultureInfo.InvariantCulture,
+            $"Imin·Rf = {Fmt.Q(spec.Input.CurrentMin * spec.Feedback.Resistance.Typ.Ohms)} is {ratio:0.###}× 2kT/q ({Fmt.Q(twoKtq)} at {hottest.Celsius:0.#} °C): Rf's thermal noise is {1 / ratio:0.#}× the shot noise of the {Fmt.Q(spec.Input.CurrentMin)} minimum signal in power, so the resistor, not the signal, sets the noise floor.");
+        if (found is { } rf)
+        {
+            var r = new Resistance(rf);
+            yield return context.Report("/feedback/resistance",
+                message + $" Rf ≥ {Fmt.Q(new Resistance(needed))} fixes it; {SpecEdits.RfText(spec, r)} is the smallest standard value that does and still fits the output headroom (re-checked). Re-check Cf for the bandwidth.",
+                new FixSuggestion("/feedback/resistance", SpecEdits.RfText(spec, r)));
+        }
+        else
+        {
+            yield return context.Report("/feedback/resistance",
+                message + $" Rf ≥ {Fmt.Q(new Resistance(needed))} would fix it, but no such standard value keeps the full-scale output inside the rails: split the range over two gains, or accept the noise and waive this rule.");
+        }
+    }
+}

@@ -1,0 +1,82 @@
+using System.CommandLine;
+using System.Globalization;
+using SpecLint.Rules.Checking;
+using SpecLint.Rules.Engine;
+
+namespace SpecLint.Cli.Commands;
+
+/// <summary><c>speclint check [paths]</c>: validates specs, analyses them, runs the rules, writes the outputs.</summary>
+internal static class CheckCommand
+{
+    public static Command Create()
+    {
+        var paths = new Argument<string[]>("paths") { Description = "Spec files or folders (default: the repository, per .speclint.yaml)", Arity = ArgumentArity.ZeroOrMore };
+        var format = new Option<string>("--format") { Description = "Terminal output: text, json (DESIGN §5) or github (workflow annotations)", DefaultValueFactory = _ => DefaultFormat() };
+        format.AcceptOnlyFromAmong("text", "json", "github");
+        var report = new Option<string?>("--report") { Description = "Write a Markdown review report to this file (plots beside it)" };
+        var failOn = new Option<string?>("--fail-on") { Description = "Lowest severity that fails the run: error, warning or note (overrides fail-on in .speclint.yaml)" };
+        failOn.AcceptOnlyFromAmong("error", "warning", "note");
+        var config = new Option<string?>("--config") { Description = "Use this configuration file instead of the nearest .speclint.yaml" };
+        var asOf = new Option<string?>("--as-of") { Description = "Judge waiver expiry dates as of this day (YYYY-MM-DD; default today)" };
+        var nominal = new Option<bool>("--nominal-only") { Description = "Skip tolerance corners and Monte Carlo" };
+        var quiet = new Option<bool>("--quiet") { Description = "No progress on stderr" };
+        var command = new Command("check", "Check spec files: schema, analysis, rules. Exit 0 pass, 1 findings at the fail level, 2 unusable input")
+        {
+            paths, format, report, failOn, config, asOf, nominal, quiet,
+        };
+        command.SetAction(parse =>
+        {
+            var error = parse.InvocationConfiguration.Error;
+            var output = parse.InvocationConfiguration.Output;
+            if (!TryDate(parse.GetValue(asOf), out var today))
+            {
+                error.WriteLine($"speclint: --as-of: '{parse.GetValue(asOf)}' is not a date; write e.g. 2027-03-31");
+                return ExitCodes.UnusableInput;
+            }
+
+            var configPath = parse.GetValue(config);
+            if (configPath is not null && !File.Exists(configPath))
+            {
+                error.WriteLine($"speclint: --config: no such file '{configPath}'");
+                return ExitCodes.UnusableInput;
+            }
+
+            var reportPath = parse.GetValue(report);
+            var inputs = parse.GetValue(paths) ?? [];
+            if (reportPath is not null && !OutputGuard.IsSafeTarget(reportPath, inputs, out var why))
+            {
+                error.WriteLine($"speclint: --report: {why}");
+                return ExitCodes.UnusableInput;
+            }
+
+            SeverityNames.TryParse(parse.GetValue(failOn), out var fail);
+            var options = new CheckOptions
+            {
+                Paths = inputs,
+                ConfigPath = configPath,
+                Today = today,
+                FailOn = parse.GetValue(failOn) is null ? null : fail,
+                Tolerances = !parse.GetValue(nominal),
+                Progress = Progress.For(error, parse.GetValue(quiet)),
+            };
+            var run = Checker.Run(options);
+            Outputs.Write(run, parse.GetValue(format)!, output, reportPath);
+            return run.ExitCode;
+        });
+        return command;
+    }
+
+    private static string DefaultFormat() =>
+        string.Equals(Environment.GetEnvironmentVariable("GITHUB_ACTIONS"), "true", StringComparison.OrdinalIgnoreCase) ? "github" : "text";
+
+    private static bool TryDate(string? text, out DateOnly date)
+    {
+        if (text is null)
+        {
+            date = DateOnly.FromDateTime(DateTime.UtcNow);
+            return true;
+        }
+
+        return DateOnly.TryParseExact(text, "yyyy-MM-dd", CultureInfo.InvariantCulture, DateTimeStyles.None, out date);
+    }
+}

@@ -1,0 +1,66 @@
+using System.CommandLine;
+using System.Reflection;
+using System.Text;
+using SpecLint.Reporting.Terminal;
+using SpecLint.Rules.Checking;
+using SpecLint.Rules.Engine;
+
+namespace SpecLint.Cli.Commands;
+
+/// <summary>
+/// <c>speclint demo</c>: checks the built-in example channels of an invented instrument and writes a report
+/// into one folder it names. It writes nothing else, and never into a folder it did not create.
+/// </summary>
+internal static class DemoCommand
+{
+    private const string Marker = ".speclint-demo";
+
+    public static Command Create()
+    {
+        var outDir = new Option<string>("--out") { Description = "Folder for the demo specs and report (created; must be new or an earlier demo folder)", DefaultValueFactory = _ => "speclint-demo" };
+        var command = new Command("demo", "Check the built-in demo specs and write a Markdown report") { outDir };
+        command.SetAction(parse =>
+        {
+            var output = parse.InvocationConfiguration.Output;
+            var error = parse.InvocationConfiguration.Error;
+            var folder = parse.GetValue(outDir)!;
+            if (Directory.Exists(folder) && Directory.EnumerateFileSystemEntries(folder).Any() && !File.Exists(Path.Combine(folder, Marker)))
+            {
+                error.WriteLine($"speclint: '{folder}' exists and was not made by 'speclint demo'; nothing was written. Choose another folder with --out.");
+                return ExitCodes.UnusableInput;
+            }
+
+            var specs = Path.Combine(folder, "specs");
+            Directory.CreateDirectory(specs);
+            File.WriteAllText(Path.Combine(folder, Marker), "made by 'speclint demo'; safe to delete\n", new UTF8Encoding(false));
+            foreach (var (name, text) in DemoSpecs())
+            {
+                File.WriteAllText(Path.Combine(specs, name), text, new UTF8Encoding(false));
+            }
+
+            var run = Checker.Run(new CheckOptions { Paths = [specs] });
+            TerminalReport.Write(run, output, color: false);
+            var report = Path.Combine(folder, "report.md");
+            Outputs.WriteReport(run, report, "SpecLint demo: the Saltmarsh Tern buoy's optical front end");
+            output.WriteLine();
+            output.WriteLine($"Demo report: {report}");
+            output.WriteLine("These channels are invented examples; some are clean and some carry deliberate design mistakes.");
+            output.WriteLine($"'speclint check {specs}' gives the same findings with the exit code CI would see ({run.ExitCode}).");
+            return ExitCodes.Clean;
+        });
+        return command;
+    }
+
+    /// <summary>The embedded demo specs, by file name, in a stable order.</summary>
+    public static IEnumerable<(string Name, string Text)> DemoSpecs()
+    {
+        var asm = Assembly.GetExecutingAssembly();
+        const string prefix = "SpecLint.Cli.Demo.";
+        foreach (var resource in asm.GetManifestResourceNames().Where(n => n.StartsWith(prefix, StringComparison.Ordinal)).Order(StringComparer.Ordinal))
+        {
+            using var stream = asm.GetManifestResourceStream(resource)!;
+            using var reader = new StreamReader(stream, Encoding.UTF8);
+            yield return (resource[prefix.Length..], reader.ReadToEnd());
+        }
+    }
+}

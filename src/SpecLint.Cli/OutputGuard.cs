@@ -1,0 +1,31 @@
+namespace SpecLint.Cli;
+
+/// <summary>Refuses output paths that would overwrite an input: a report must never replace a spec.</summary>
+internal static class OutputGuard
+{
+    public static bool IsSafeTarget(string path, IEnumerable<string> inputs, out string why)
+    {
+        var full = Path.GetFullPath(path);
+        var ext = Path.GetExtension(full).ToLowerInvariant();
+        if (ext is ".yaml" or ".yml")
+        {
+            why = $"'{path}' looks like a spec or configuration file; write the report to a .md file";
+            return false;
+        }
+
+        if (inputs.Any(i => string.Equals(Path.GetFullPath(i), full, StringComparison.Ordinal)))
+        {
+            why = $"'{path}' is one of the inputs";
+            return false;
+        }
+
+        if (Directory.Exists(full))
+        {
+            why = $"'{path}' is a folder; give a file name such as {Path.Combine(path, "report.md")}";
+            return false;
+        }
+
+        why = "";
+        return true;
+    }
+}

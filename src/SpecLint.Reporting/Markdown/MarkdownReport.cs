@@ -1,0 +1,229 @@
+using System.Globalization;
+using System.Reflection;
+using System.Text;
+using SpecLint.Rules.Checking;
+using SpecLint.Rules.Engine;
+
+namespace SpecLint.Reporting.Markdown;
+
+/// <summary>
+/// The review report: run context, a summary table of every spec, findings grouped by spec with links to
+/// their lines, waived findings, and per-spec metrics. Deterministic: no wall-clock time unless asked.
+/// </summary>
+public sealed class MarkdownReport
+{
+    private readonly CheckRun _run;
+    private readonly string _reportDirectory;
+    private readonly StringBuilder _md = new();
+
+    private MarkdownReport(CheckRun run, string reportDirectory)
+    {
+        _run = run;
+        _reportDirectory = reportDirectory;
+    }
+
+    /// <summary>Options for the report.</summary>
+    /// <param name="Title">The first heading.</param>
+    /// <param name="GeneratedAt">A time to print in the run context, or null for none (reruns stay identical).</param>
+    /// <param name="Extras">Per-spec Markdown appended after each spec's metrics (plots), by spec file.</param>
+    public sealed record Options(string Title = "SpecLint report", DateTimeOffset? GeneratedAt = null, IReadOnlyDictionary<string, string>? Extras = null);
+
+    /// <summary>The tool version printed in the run context.</summary>
+    public static string ToolVersion =>
+        typeof(MarkdownReport).Assembly.GetCustomAttribute<AssemblyInformationalVersionAttribute>()?.InformationalVersion.Split('+')[0] ?? "0.0.0";
+
+    /// <summary>Renders the report; links are relative to <paramref name="reportDirectory"/>.</summary>
+    public static string Render(CheckRun run, string reportDirectory, Options? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(run);
+        var r = new MarkdownReport(run, Path.GetFullPath(reportDirectory));
+        r.Build(options ?? new Options());
+        return r._md.ToString();
+    }
+
+    private void Build(Options options)
+    {
+        Line($"# {options.Title}");
+        Line();
+        RunContext(options);
+        Summary();
+        Findings();
+        Waived();
+        foreach (var spec in _run.Specs.Where(s => s.Analysis is not null))
+        {
+            SpecSection(spec, options);
+        }
+    }
+
+    private void RunContext(Options options)
+    {
+        var files = _run.Specs.Length;
+        Line($"SpecLint {ToolVersion} checked {files} spec file{(files == 1 ? "" : "s")}; fail level `{_run.FailOn.Name()}`; " +
+             (_run.ConfigFiles.IsEmpty ? "no `.speclint.yaml` (built-in defaults)." : "configuration " + string.Join(", ", _run.ConfigFiles.Select(c => $"`{Rel(c)}`")) + "."));
+        if (options.GeneratedAt is { } at)
+        {
+            Line();
+            Line("Generated " + at.ToString("yyyy-MM-dd HH:mm 'UTC'", CultureInfo.InvariantCulture) + ".");
+        }
+
+        Line();
+        var verdict = _run.ExitCode switch
+        {
+            ExitCodes.Clean => "**Result: pass.**",
+            ExitCodes.FindingsAtFailLevel => "**Result: fail**: findings at or above the fail level.",
+            _ => "**Result: fail**: some input could not be read.",
+        };
+        Line(verdict);
+        Line();
+        Line("> SpecLint is a design aid. Its figures come from a linear small-signal model of the datasheet values in each spec: verify every channel on the bench. Where a design involves hazardous voltages or laser sources, local codes and licensed practice take precedence.");
+        Line();
+    }
+
+    private void Summary()
+    {
+        Line("## Summary");
+        Line();
+        Line("| Spec | Result | Phase margin | Bandwidth | Input noise (rms) | Output range | Findings |");
+        Line("|---|---|---:|---:|---:|---|---|");
+        foreach (var s in _run.Specs)
+        {
+            var a = s.Analysis;
+            var result = s.IsUnusable ? "unreadable" : s.WorstSeverity is { } w && w >= _run.FailOn ? "fail" : "pass";
+            var pm = a is null ? "–" : a.PhaseMargin is { } p ? MetricRows.Deg(p.Degrees) + Worst(s) : "undefined";
+            var bw = a?.Bandwidth is { } b ? MetricRows.Q(b.Hertz, Core.Units.Dimension.Frequency) : "–";
+            var noise = a?.Noise is { } n ? MetricRows.Q(n.InputRms.Amperes, Core.Units.Dimension.Current) : "–";
+            var range = a is null ? "–" : $"{MetricRows.Q(a.Output.MinExact.Volts, Core.Units.Dimension.Voltage)} .. {MetricRows.Q(a.Output.MaxExact.Volts, Core.Units.Dimension.Voltage)}";
+            var counts = Counts(s);
+            Line($"| [{MarkdownText.Cell(s.Name)}]({MarkdownText.Target(Rel(s.File))}) | {result} | {pm} | {bw} | {noise} | {range} | {counts} |");
+        }
+
+        Line();
+    }
+
+    private static string Worst(SpecOutcome s) =>
+        s.Tolerances?.PhaseMarginMin is { } m ? $" (worst {MetricRows.Deg(m.Degrees)})" : "";
+
+    private static string Counts(SpecOutcome s)
+    {
+        var live = s.Findings.Where(f => !f.Waived).ToList();
+        if (live.Count == 0)
+        {
+            return s.Findings.Any(f => f.Waived) ? "waived only" : "none";
+        }
+
+        var parts = new[] { Severity.Error, Severity.Warning, Severity.Note }
+            .Select(sev => (sev, n: live.Count(f => f.Severity == sev)))
+            .Where(x => x.n > 0)
+            .Select(x => string.Create(CultureInfo.InvariantCulture, $"{x.n} {x.sev.Name()}{(x.n == 1 ? "" : "s")}"));
+        return string.Join(", ", parts);
+    }
+
+    private void Findings()
+    {
+        Line("## Findings");
+        Line();
+        var any = false;
+        if (!_run.RunProblems.IsEmpty)
+        {
+            any = true;
+            Line("### Run");
+            Line();
+            foreach (var f in _run.RunProblems)
+            {
+                FindingLine(f);
+            }
+
+            Line();
+        }
+
+        foreach (var s in _run.Specs)
+        {
+            var live = s.Findings.Where(f => !f.Waived).ToList();
+            if (live.Count == 0)
+            {
+                continue;
+            }
+
+            any = true;
+            Line($"### {MarkdownText.Cell(s.Name)}");
+            Line();
+            foreach (var f in live)
+            {
+                FindingLine(f);
+            }
+
+            Line();
+        }
+
+        if (!any)
+        {
+            Line("No findings.");
+            Line();
+        }
+    }
+
+    private void Waived()
+    {
+        var waived = _run.Specs.SelectMany(s => s.Findings.Where(f => f.Waived)).ToList();
+        if (waived.Count == 0)
+        {
+            return;
+        }
+
+        Line("## Waived findings");
+        Line();
+        Line("| Spec | Rule | Where | Reason | Finding |");
+        Line("|---|---|---|---|---|");
+        foreach (var f in waived)
+        {
+            Line($"| {MarkdownText.Cell(Path.GetFileName(f.File))} | `{f.RuleId}` | [{MarkdownText.Cell(LineLabel(f))}]({LineLink(f)}) | {MarkdownText.Cell(f.WaiverReason ?? "")} | {MarkdownText.Cell(f.Message)} |");
+        }
+
+        Line();
+    }
+
+    private void FindingLine(Finding f)
+    {
+        var fix = f.Fix is { } x ? $" **Fix:** set `{x.Path}` to `{x.Value}`." : "";
+        Line($"- **{f.Severity.Name()}** `{f.RuleId}` at [{MarkdownText.Cell(LineLabel(f))}]({LineLink(f)}): {MarkdownText.Cell(f.Message)}{fix}");
+    }
+
+    private void SpecSection(SpecOutcome s, Options options)
+    {
+        var a = s.Analysis!;
+        Line($"## {MarkdownText.Cell(s.Name)}");
+        Line();
+        var title = s.Spec?.Title is { Length: > 0 } t ? MarkdownText.Cell(t) + ". " : "";
+        Line($"{title}File [{MarkdownText.Cell(Rel(s.File))}]({MarkdownText.Target(Rel(s.File))}). Nominal values at {a.Circuit.Temperature.Celsius.ToString("0.#", CultureInfo.InvariantCulture)} °C; noise at the hottest temperature.");
+        Line();
+        Line("| Metric | Value | Note |");
+        Line("|---|---:|---|");
+        foreach (var (metric, value, note) in MetricRows.For(a))
+        {
+            Line($"| {metric} | {MarkdownText.Cell(value)} | {MarkdownText.Cell(note)} |");
+        }
+
+        Line();
+        if (s.Tolerances is { } tol)
+        {
+            foreach (var l in CornerSection.Lines(tol))
+            {
+                Line(l);
+            }
+        }
+
+        if (options.Extras is not null && options.Extras.TryGetValue(s.File, out var extra))
+        {
+            Line(extra.TrimEnd());
+            Line();
+        }
+    }
+
+    private string LineLabel(Finding f) => $"{Rel(f.File)}:{f.Line}:{f.Column}";
+
+    private string LineLink(Finding f) => MarkdownText.Target(Rel(f.File)) + "#L" + f.Line.ToString(CultureInfo.InvariantCulture);
+
+    private string Rel(string file) => Path.GetRelativePath(_reportDirectory, Path.GetFullPath(file)).Replace('\\', '/');
+
+    private void Line(string text = "") => _md.Append(text).Append('\n');
+}

@@ -1,0 +1,28 @@
+using SpecLint.Rules.Engine;
+
+namespace SpecLint.Rules.Checking;
+
+/// <summary>What a <c>check</c> run is asked to do.</summary>
+public sealed record CheckOptions
+{
+    /// <summary>Files and folders to check; empty means the repository that contains the working directory.</summary>
+    public IReadOnlyList<string> Paths { get; init; } = [];
+
+    /// <summary>An explicit configuration file, overriding the walk up from each spec.</summary>
+    public string? ConfigPath { get; init; }
+
+    /// <summary>The date waivers are judged against.</summary>
+    public DateOnly Today { get; init; } = DateOnly.FromDateTime(DateTime.UtcNow);
+
+    /// <summary>A fail level overriding the configuration's <c>fail-on</c>.</summary>
+    public Severity? FailOn { get; init; }
+
+    /// <summary>Whether to compute tolerance corners and Monte Carlo (on by default).</summary>
+    public bool Tolerances { get; init; } = true;
+
+    /// <summary>The rules to run.</summary>
+    public RuleCatalog Catalog { get; init; } = RuleCatalog.BuiltIn;
+
+    /// <summary>Reports progress (file index, count, file) for long runs; null for none.</summary>
+    public Action<int, int, string>? Progress { get; init; }
+}

@@ -1,0 +1,159 @@
+using System.Collections.Immutable;
+using SpecLint.Core.Analysis.Tolerance;
+using SpecLint.Core.Config;
+using SpecLint.Core.Spec;
+using SpecLint.Core.Spec.Model;
+using SpecLint.Rules.Engine;
+
+namespace SpecLint.Rules.Checking;
+
+/// <summary>
+/// One <c>check</c>: finds the spec files, reads each with its repository configuration, analyses it, runs
+/// the rules, applies waivers. A file that cannot be read is reported and the others are still checked.
+/// </summary>
+public static class CheckRunner
+{
+    /// <summary>Runs a check. Never throws for bad input; an exception here is a SpecLint bug.</summary>
+    public static CheckRun Run(CheckOptions options, Func<TiaSpec, RepoConfig, bool, ToleranceResult?>? tolerances = null)
+    {
+        ArgumentNullException.ThrowIfNull(options);
+        var problems = new List<Finding>();
+        var configs = new ConfigCache(options.ConfigPath, options.Catalog, problems);
+        var rootConfig = options.Paths.Count == 0 || options.ConfigPath is not null
+            ? configs.ForFolder(Directory.GetCurrentDirectory())
+            : configs.ForFolder(Directory.Exists(options.Paths[0]) ? options.Paths[0] : Path.GetDirectoryName(Path.GetFullPath(options.Paths[0]))!);
+
+        var paths = options.Paths.Count > 0
+            ? options.Paths
+            : [rootConfig.Path is { } p ? Path.GetRelativePath(Directory.GetCurrentDirectory(), Path.GetDirectoryName(Path.GetFullPath(p))!) : "."];
+        var files = SpecFileFinder.Find(paths, rootConfig.Include, out var missing);
+        foreach (var m in missing)
+        {
+            problems.Add(new Finding(RuleIds.SpecInvalid, Severity.Error, m, "", 1, 1, "no such file or folder"));
+        }
+
+        var outcomes = new List<SpecOutcome>();
+        for (var i = 0; i < files.Count; i++)
+        {
+            options.Progress?.Invoke(i + 1, files.Count, files[i]);
+            var config = configs.ForSpec(files[i]);
+            outcomes.Add(CheckOne(files[i], config, options, tolerances));
+        }
+
+        CheckUniqueNames(outcomes, problems);
+        return new CheckRun(
+            [.. outcomes],
+            [.. problems],
+            options.FailOn ?? ConfigurationBinding.FailOn(rootConfig),
+            [.. configs.Files]);
+    }
+
+    /// <summary>Checks one file with a given configuration.</summary>
+    public static SpecOutcome CheckOne(string file, RepoConfig config, CheckOptions options, Func<TiaSpec, RepoConfig, bool, ToleranceResult?>? tolerances = null)
+    {
+        ArgumentNullException.ThrowIfNull(options);
+        var loaded = SpecLoader.LoadFile(file, file);
+        if (loaded.Spec is not { } spec || !loaded.IsValid)
+        {
+            var bad = loaded.Diagnostics
+                .Select(d => new Finding(RuleIds.SpecInvalid, Severity.Error, d.File, d.Pointer, d.Line, d.Column, (d.KeyPath.Length > 0 ? d.KeyPath + ": " : "") + d.Message))
+                .ToImmutableArray();
+            return new SpecOutcome(file, null, null, null, null, bad);
+        }
+
+        return CheckSpec(spec, config, options, tolerances);
+    }
+
+    /// <summary>Checks an already loaded spec.</summary>
+    public static SpecOutcome CheckSpec(TiaSpec spec, RepoConfig config, CheckOptions options, Func<TiaSpec, RepoConfig, bool, ToleranceResult?>? tolerances = null)
+    {
+        ArgumentNullException.ThrowIfNull(spec);
+        ArgumentNullException.ThrowIfNull(config);
+        ArgumentNullException.ThrowIfNull(options);
+        var analyzer = new DefaultSpecAnalyzer((s, mc) => options.Tolerances && tolerances is not null ? tolerances(s, config, mc) : null);
+        SpecAnalysis analysis;
+        try
+        {
+            analysis = analyzer.Analyze(spec, includeNoise: true, includeCorners: true, monteCarlo: true);
+        }
+        catch (ArithmeticException e)
+        {
+            var at = spec.Locations.Locate("");
+            return new SpecOutcome(spec.File, spec, null, null, null,
+                [new Finding(RuleIds.AnalysisFailed, Severity.Error, spec.File, "", at.Line, at.Column, $"the analysis did not converge ({e.Message}); check the values for a typo in a prefix")]);
+        }
+
+        var findings = new List<Finding>();
+        foreach (var rule in options.Catalog.Rules)
+        {
+            var ruleConfig = ConfigurationBinding.For(config, rule.Descriptor.Id);
+            if (ruleConfig.Off)
+            {
+                continue;
+            }
+
+            var context = new RuleContext(analysis, analyzer, rule.Descriptor, ruleConfig, id => ConfigurationBinding.For(config, id));
+            foreach (var f in rule.Check(context))
+            {
+                findings.Add(ruleConfig.Severity is { } s ? f with { Severity = s } : f);
+            }
+        }
+
+        var all = WaiverApplication.Apply(spec, findings, options.Today, options.Catalog.KnownIds)
+            .OrderBy(f => f.Line).ThenBy(f => f.Column).ThenBy(f => f.RuleId, StringComparer.Ordinal).ThenBy(f => f.Message, StringComparer.Ordinal)
+            .ToImmutableArray();
+        return new SpecOutcome(spec.File, spec, analysis.Circuit, analysis.Analysis, analysis.Tolerances, all);
+    }
+
+    private static void CheckUniqueNames(List<SpecOutcome> outcomes, List<Finding> problems)
+    {
+        foreach (var group in outcomes.Where(o => o.Spec is not null).GroupBy(o => o.Spec!.Name, StringComparer.Ordinal).Where(g => g.Count() > 1))
+        {
+            foreach (var o in group.Skip(1))
+            {
+                var at = o.Spec!.Locations.Locate("/name");
+                problems.Add(new Finding(RuleIds.SpecInvalid, Severity.Error, o.File, "/name", at.Line, at.Column,
+                    $"name: '{group.Key}' is already used by {group.First().File}; names must be unique within the repository"));
+            }
+        }
+    }
+
+    private sealed class ConfigCache(string? explicitPath, RuleCatalog catalog, List<Finding> problems)
+    {
+        private readonly Dictionary<string, RepoConfig> _byPath = new(StringComparer.Ordinal);
+
+        public IEnumerable<string> Files => _byPath.Keys.Where(k => k.Length > 0).Order(StringComparer.Ordinal);
+
+        public RepoConfig ForSpec(string specFile) =>
+            Load(explicitPath ?? RepoConfigLoader.FindFor(specFile));
+
+        public RepoConfig ForFolder(string folder) =>
+            Load(explicitPath ?? RepoConfigLoader.FindFor(Path.Combine(folder, "_")));
+
+        private RepoConfig Load(string? path)
+        {
+            var key = path ?? "";
+            if (_byPath.TryGetValue(key, out var cached))
+            {
+                return cached;
+            }
+
+            var config = RepoConfig.Default;
+            if (path is not null)
+            {
+                var display = Path.GetRelativePath(Directory.GetCurrentDirectory(), path).Replace('\\', '/');
+                var loaded = RepoConfigLoader.Load(path, display);
+                foreach (var d in loaded.Diagnostics)
+                {
+                    problems.Add(new Finding(RuleIds.ConfigInvalid, Severity.Error, d.File, d.Pointer, d.Line, d.Column, (d.KeyPath.Length > 0 ? d.KeyPath + ": " : "") + d.Message));
+                }
+
+                config = loaded.Config;
+                problems.AddRange(ConfigurationBinding.Validate(config, catalog, display));
+            }
+
+            _byPath[key] = config;
+            return config;
+        }
+    }
+}

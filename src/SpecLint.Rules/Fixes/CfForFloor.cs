@@ -1,0 +1,40 @@
+using SpecLint.Core.Analysis;
+using SpecLint.Core.Units;
+using SpecLint.Rules.Engine;
+
+namespace SpecLint.Rules.Fixes;
+
+/// <summary>
+/// The smallest standard feedback capacitor that gives at least a phase-margin floor, at nominal and (when
+/// the spec has tolerances) at the worst corner. Starts from the exact-model solution and re-runs the full
+/// analysis for every candidate, so the suggestion is never an asymptotic estimate.
+/// </summary>
+public static class CfForFloor
+{
+    /// <summary>The fix, or null when no standard value within reach restores the floor.</summary>
+    public static FixSuggestion? Find(RuleContext context, Angle floor, Func<SpecAnalysis, bool>? alsoRequire = null)
+    {
+        ArgumentNullException.ThrowIfNull(context);
+        var cf = Value(context, floor, alsoRequire);
+        return cf is { } c ? new FixSuggestion("/feedback/capacitance", SpecEdits.CfText(context.Spec, c)) : null;
+    }
+
+    /// <summary>The capacitance itself, or null.</summary>
+    public static Capacitance? Value(RuleContext context, Angle floor, Func<SpecAnalysis, bool>? alsoRequire = null)
+    {
+        ArgumentNullException.ThrowIfNull(context);
+        var start = DesignHelpers.CfForPhaseMargin(context.Circuit, floor) is { } exact ? exact.Farads : context.Circuit.Cf.Farads;
+        if (!(start > 0))
+        {
+            start = 0.1e-12;
+        }
+
+        var series = StandardValueSearch.SeriesFor(context.Spec.Feedback.Capacitance, ESeries.E12);
+        var found = StandardValueSearch.Find(series, start, upward: true, candidate =>
+        {
+            var r = context.Reanalyze(SpecEdits.WithCf(context.Spec, new Capacitance(candidate)));
+            return r.WorstPhaseMarginDeg is { } w && w >= floor.Degrees && (alsoRequire?.Invoke(r) ?? true);
+        }, steps: 24);
+        return found is { } f ? new Capacitance(f) : null;
+    }
+}
