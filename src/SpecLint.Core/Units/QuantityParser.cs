@@ -14,7 +14,7 @@ public static partial class QuantityParser
     private static partial Regex ValueRegex();
 
     // RKM: the letter stands for the decimal point and the multiplier (IEC 60062 §4): 4k7, 2p2, R47, 470R, 1M0.
-    [GeneratedRegex(@"^(?<int>\d*)(?<mark>[RrKkMGTpnuµμm])(?<frac>\d*)\s*(?<unit>Ω|Ω|ohm|ohms|F)?(?<rest>(?:\s+.*)?)$", RegexOptions.CultureInvariant)]
+    [GeneratedRegex(@"^(?<int>\d*)(?<mark>[RrKkMGTpnuµμm])(?<frac>\d*)\s*(?<unit>Ω|\u2126|ohm|ohms|F)?(?<rest>(?:\s+.*)?)$", RegexOptions.CultureInvariant)]
     private static partial Regex RkmRegex();
 
     [GeneratedRegex(@"^(?:±|\+/-|\+-)\s*(?<a>.+)$", RegexOptions.CultureInvariant)]
