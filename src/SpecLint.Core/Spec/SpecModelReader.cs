@@ -162,7 +162,9 @@ internal sealed partial class SpecModelReader(YamlTree tree, DiagnosticSink sink
         Has(pointer) && Node(pointer) is JsonValue v && v.GetValueKind() == JsonValueKind.String ? v.GetValue<string>() : null;
 
     private int? Int(string pointer) =>
-        Has(pointer) && Node(pointer) is JsonValue v && v.TryGetValue<long>(out var l) ? (int)l : null;
+        Has(pointer) && Node(pointer) is JsonValue v && v.GetValueKind() == JsonValueKind.Number
+            ? v.TryGetValue<long>(out var l) ? (int)l : (int)v.GetValue<double>()
+            : null;
 
     private ImmutableArray<string> Strings(string pointer) =>
         Has(pointer) && Node(pointer) is JsonArray a

@@ -57,15 +57,15 @@ internal sealed partial class SchemaValidator
             }
 
             var at = r.InstanceLocation.ToString();
-            var schemaPointer = Uri.UnescapeDataString(r.SchemaLocation.Fragment.TrimStart('#'));
             foreach (var (key, libraryMessage) in r.Errors)
             {
 
-                // A failing `false` subschema reports under the key "" and (in 8.0.5) with a SchemaLocation that
-                // has an extra segment, so its keyword and owner come from the evaluation path instead.
+                // SchemaLocation is unreliable in 8.0.5 (below items and additionalProperties it gains an extra
+                // segment), so the schema is found by walking the evaluation path. A failing `false` subschema
+                // reports under the key "": its keyword is the last segment and its owner the parent.
                 var evaluationPath = r.EvaluationPath.ToString();
                 var keyword = key.Length > 0 ? key : JsonPointerText.Split(evaluationPath) is { Count: > 0 } e ? e[^1] : "false";
-                var owner = key.Length > 0 ? Resolve(schemaPointer) : ResolveEvaluationPath(JsonPointerText.Parent(evaluationPath));
+                var owner = ResolveEvaluationPath(key.Length > 0 ? evaluationPath : JsonPointerText.Parent(evaluationPath));
                 foreach (var v in Word(keyword, at, owner, root, libraryMessage))
                 {
                     if (seen.Add((v.Pointer, v.Keyword, v.Message)))

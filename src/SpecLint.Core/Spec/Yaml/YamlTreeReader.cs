@@ -72,7 +72,7 @@ public static partial class YamlTreeReader
             return Fail(1, 1, $"the file is over {MaxFileBytes.ToString(CultureInfo.InvariantCulture)} bytes (1 MiB); split it into one file per channel");
         }
 
-        var state = new ReaderState(new Parser(new StringReader(text)));
+        var state = new ReaderState(new Parser(new StringReader(text)), text);
         return state.Run();
     }
 
@@ -137,7 +137,23 @@ public static partial class YamlTreeReader
         public string Pointer { get; } = pointer;
     }
 
-    private sealed class ReaderState(Parser parser)
+    private static (int Line, int Column)? FindIndentTab(string text)
+    {
+        var lines = text.Split('\n');
+        for (var i = 0; i < lines.Length; i++)
+        {
+            var indent = lines[i].Length - lines[i].TrimStart(' ', '\t').Length;
+            var tab = lines[i].IndexOf('\t', 0, indent);
+            if (tab >= 0 && indent < lines[i].TrimEnd('\r').Length)
+            {
+                return (i + 1, tab + 1);
+            }
+        }
+
+        return null;
+    }
+
+    private sealed class ReaderState(Parser parser, string text)
     {
         private readonly Dictionary<string, SourcePosition> _positions = new(StringComparer.Ordinal);
         private readonly Dictionary<string, string> _scalarText = new(StringComparer.Ordinal);
@@ -181,7 +197,20 @@ public static partial class YamlTreeReader
             }
             catch (YamlException e)
             {
-                _problems.Add(new YamlProblem(Line(e.Start), Column(e.Start), "", CleanMessage(e)));
+                // YamlDotNet marks a tab in indentation at the start of the enclosing mapping (often 1:1), so the
+                // tab itself is looked up in the text; everything else is reported at the exception's Start.
+                var (line, column) = e.Message.Contains("tab", StringComparison.Ordinal) && FindIndentTab(text) is { } tab
+                    ? tab
+                    : (Line(e.Start), Column(e.Start));
+                _problems.Add(new YamlProblem(line, column, "", CleanMessage(e)));
+            }
+            catch (InvalidOperationException)
+            {
+                // YamlDotNet 18.1.0's scanner throws this (not a YamlException) when the text ends inside an
+                // unclosed flow collection, e.g. "{ a: 1". The last event read is the best position we have.
+                var last = parser.Current?.End ?? Mark.Empty;
+                _problems.Add(new YamlProblem(Line(last), Column(last), "",
+                    "YAML syntax: the file ends inside a { } or [ ]; a closing bracket is missing"));
             }
 
             return new YamlTree(null, false, _positions, _scalarText, [.. _problems]);
