@@ -75,6 +75,12 @@ public static class RepoConfigLoader
 
     private static RepoConfigLoadResult Load(YamlTree tree, string shown, string path)
     {
+        if (tree.IsEmpty)
+        {
+            // A configuration with nothing in it (or only comments) means "all defaults", unlike an empty spec.
+            return new RepoConfigLoadResult(RepoConfig.Default with { Path = path }, []);
+        }
+
         var sink = new DiagnosticSink(shown, SpecDiagnostic.ConfigInvalid, tree);
         sink.AddYaml(tree.Problems);
         if (!tree.HasRoot)
@@ -82,7 +88,7 @@ public static class RepoConfigLoader
             return new RepoConfigLoadResult(RepoConfig.Default with { Path = path }, sink.ToImmutable());
         }
 
-        // An empty configuration file (only comments) means "all defaults", unlike an empty spec.
+        // "---" alone gives a null document: treat it like an empty file.
         var root = tree.Root ?? new JsonObject();
         sink.AddSchema(ConfigSchema.Validate(root));
         var obj = root as JsonObject ?? [];

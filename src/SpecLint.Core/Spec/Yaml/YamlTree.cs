@@ -16,6 +16,9 @@ public sealed class YamlTree
         Problems = problems;
     }
 
+    /// <summary>True when the text holds no document at all (empty, or only comments); <see cref="Problems"/> then says so.</summary>
+    public bool IsEmpty => !HasRoot && Problems.Length == 1 && Problems[0].Message.StartsWith(YamlTreeReader.EmptyMessage, StringComparison.Ordinal);
+
     /// <summary>The document as JSON; null for an unusable file or a document that is only <c>null</c>.</summary>
     public JsonNode? Root { get; }
 

@@ -30,6 +30,8 @@ public static partial class YamlTreeReader
     /// <summary>Most nodes (maps, lists and scalars) accepted in one file.</summary>
     public const int MaxNodes = 100_000;
 
+    internal const string EmptyMessage = "the file is empty";
+
     private static readonly UTF8Encoding StrictUtf8 = new(encoderShouldEmitUTF8Identifier: false, throwOnInvalidBytes: true);
 
     [GeneratedRegex(@"^\(Line: \d+, Col: \d+, Idx: \d+\) - \(Line: \d+, Col: \d+, Idx: \d+\): ", RegexOptions.CultureInvariant)]
@@ -167,7 +169,7 @@ public static partial class YamlTreeReader
                 Expect<StreamStart>();
                 if (!parser.MoveNext() || parser.Current is StreamEnd)
                 {
-                    throw new FatalProblem(Mark.Empty, "", "the file is empty; a spec starts with \"spec: 1\"");
+                    throw new FatalProblem(Mark.Empty, "", EmptyMessage + "; a spec starts with \"spec: 1\"");
                 }
 
                 if (parser.Current is not DocumentStart)
