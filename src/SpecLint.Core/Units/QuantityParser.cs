@@ -14,7 +14,8 @@ public static partial class QuantityParser
     private static partial Regex ValueRegex();
 
     // RKM: the letter stands for the decimal point and the multiplier (IEC 60062 §4): 4k7, 2p2, R47, 470R, 1M0.
-    [GeneratedRegex(@"^(?<int>\d*)(?<mark>[RrKkMGTpnuµμm])(?<frac>\d*)\s*(?<unit>Ω|Ω|ohm|ohms|F)?(?<rest>(?:\s+.*)?)$", RegexOptions.CultureInvariant)]
+    // "F" counts as the farad only when attached (2p2F): after a space it is the ±1 % letter code (4k7 F).
+    [GeneratedRegex(@"^(?<int>\d*)(?<mark>[RrKkMGTpnuµμm])(?<frac>\d*)(?:\s*(?<unit>Ω|\u2126|ohm|ohms)|(?<unit>F))?(?<rest>(?:\s+.*)?)$", RegexOptions.CultureInvariant)]
     private static partial Regex RkmRegex();
 
     [GeneratedRegex(@"^(?:±|\+/-|\+-)\s*(?<a>.+)$", RegexOptions.CultureInvariant)]
@@ -177,7 +178,19 @@ public static partial class QuantityParser
             }
         }
 
-        var value = ParseBare(t, dimension, out var extra);
+        double value;
+        string extra;
+        try
+        {
+            value = ParseBare(t, dimension, out extra);
+        }
+        catch (QuantityParseException)
+        {
+            // The deviation's own complaint ("twenty" is not a number) hides that it is the tolerance that is wrong.
+            extra = t;
+            value = 0;
+        }
+
         if (extra.Length > 0)
         {
             throw new QuantityParseException($"cannot read the tolerance in \"{whole}\"; write e.g. \"±5%\" or \"+10%/-20%\"");

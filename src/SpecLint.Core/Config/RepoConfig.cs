@@ -1,0 +1,33 @@
+using System.Collections.Immutable;
+using SpecLint.Core.Spec;
+
+namespace SpecLint.Core.Config;
+
+/// <summary>The repository configuration <c>.speclint.yaml</c> (DESIGN §8), with defaults for what it leaves out.</summary>
+/// <param name="Path">The file it was read from, or null for the built-in defaults.</param>
+/// <param name="Include">Glob patterns of spec files, relative to the configuration's folder.</param>
+/// <param name="FailOn">Lowest severity that fails the run (never <see cref="ConfigSeverity.Off"/>).</param>
+/// <param name="MonteCarlo">Monte Carlo settings.</param>
+/// <param name="Rules">Per-rule settings by rule id.</param>
+/// <param name="Locations">Where each key sits in the file.</param>
+public sealed record RepoConfig(
+    string? Path,
+    ImmutableArray<string> Include,
+    ConfigSeverity FailOn,
+    MonteCarloSettings MonteCarlo,
+    ImmutableDictionary<string, RuleSettings> Rules,
+    SourceMap Locations)
+{
+    /// <summary>The file name looked for when walking up from a spec.</summary>
+    public const string FileName = ".speclint.yaml";
+
+    /// <summary>The default include pattern.</summary>
+    public const string DefaultInclude = "**/*.tia.yaml";
+
+    /// <summary>The configuration used when no file is found: <c>**/*.tia.yaml</c>, fail on error, 1000 samples, seed 1.</summary>
+    public static RepoConfig Default { get; } = new(null, [DefaultInclude], ConfigSeverity.Error, MonteCarloSettings.Default,
+        ImmutableDictionary<string, RuleSettings>.Empty.WithComparers(StringComparer.Ordinal), SourceMap.Empty);
+
+    /// <summary>The settings of a rule, or null when the configuration does not mention it.</summary>
+    public RuleSettings? ForRule(string ruleId) => Rules.GetValueOrDefault(ruleId);
+}

@@ -1,0 +1,16 @@
+using System.Collections.Immutable;
+using System.Text.Json.Nodes;
+
+namespace SpecLint.Core.Spec.Schema;
+
+/// <summary>The JSON Schema (draft-07) of spec files (DESIGN §3), embedded in the library.</summary>
+public static class SpecSchema
+{
+    private static readonly Lazy<SchemaValidator> Validator = new(() => new SchemaValidator("spec.schema.json"));
+
+    /// <summary>The schema text, as exported to <c>schema/speclint.schema.json</c> for editors.</summary>
+    public static string Text => Validator.Value.Text;
+
+    /// <summary>Validates a spec tree; every error is worded for people and names where to report it.</summary>
+    public static ImmutableArray<SchemaViolation> Validate(JsonNode? root) => Validator.Value.Validate(root);
+}
