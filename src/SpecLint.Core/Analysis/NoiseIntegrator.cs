@@ -22,20 +22,56 @@ internal static class NoiseIntegrator
         Weights = rule.Weights;
     }
 
-    /// <summary>Integrates each source's output PSD over [fLo, fHi]; returns V² per source.</summary>
-    public static NoiseDensities Integrate(TiaModel model, double fLoHz, double fHiHz, int panelsPerDecade)
+    /// <summary>
+    /// Integrates each source's output PSD over [fLo, fHi]; returns V² per source. With a resonance at
+    /// <paramref name="peakHz"/> of quality <paramref name="q"/> (width ≈ 1/Q in ln f), the panels within ±10/Q
+    /// of it are narrowed to 0.25/Q so the peak gets the same relative resolution whatever its Q.
+    /// </summary>
+    public static NoiseDensities Integrate(TiaModel model, double fLoHz, double fHiHz, int panelsPerDecade, double? peakHz, double q)
     {
         var uLo = Math.Log(fLoHz);
         var uHi = Math.Log(fHiHz);
-        var panels = Math.Max(1, (int)Math.Ceiling((uHi - uLo) / Math.Log(10) * panelsPerDecade));
-        var h = (uHi - uLo) / panels;
+        var coarse = Math.Log(10) / panelsPerDecade;
+        var sums = new Sums();
+        if (peakHz is { } fp && q > 1 && 0.25 / q < coarse)
+        {
+            var up = Math.Log(fp);
+            var a = Math.Clamp(up - (10 / q), uLo, uHi);
+            var b = Math.Clamp(up + (10 / q), uLo, uHi);
+            Panels(model, uLo, a, coarse, ref sums);
+            Panels(model, a, b, 0.25 / q, ref sums);
+            Panels(model, b, uHi, coarse, ref sums);
+        }
+        else
+        {
+            Panels(model, uLo, uHi, coarse, ref sums);
+        }
+
+        return new NoiseDensities(
+            model.RfThermalPsd * sums.Zt,
+            model.RshThermalPsd * sums.Zt,
+            model.ShotPsd * sums.Zt,
+            model.CurrentNoisePsd * (sums.Zt + (model.CurrentNoiseCornerHz * sums.ZtOverF)),
+            model.VoltageNoisePsd * (sums.Ng + (model.VoltageNoiseCornerHz * sums.NgOverF)));
+    }
+
+    /// <summary>Equal Gauss–Legendre panels no wider than <paramref name="maxWidth"/> over [a, b] in ln f.</summary>
+    private static void Panels(TiaModel model, double a, double b, double maxWidth, ref Sums sums)
+    {
+        if (!(b > a))
+        {
+            return;
+        }
+
+        var panels = Math.Max(1, (int)Math.Ceiling((b - a) / maxWidth));
+        var h = (b - a) / panels;
         var half = h / 2;
 
         // Four sums cover all five sources: each is white·|H|² plus corner·|H|²/f, and ∫(·)df = ∫(·)f du.
         double zt = 0, ztOverF = 0, ng = 0, ngOverF = 0;
         for (var p = 0; p < panels; p++)
         {
-            var mid = uLo + ((p + 0.5) * h);
+            var mid = a + ((p + 0.5) * h);
             for (var k = 0; k < Order; k++)
             {
                 var f = Math.Exp(mid + (half * Nodes[k]));
@@ -48,15 +84,17 @@ internal static class NoiseIntegrator
             }
         }
 
-        zt *= half;
-        ztOverF *= half;
-        ng *= half;
-        ngOverF *= half;
-        return new NoiseDensities(
-            model.RfThermalPsd * zt,
-            model.RshThermalPsd * zt,
-            model.ShotPsd * zt,
-            model.CurrentNoisePsd * (zt + (model.CurrentNoiseCornerHz * ztOverF)),
-            model.VoltageNoisePsd * (ng + (model.VoltageNoiseCornerHz * ngOverF)));
+        sums.Zt += zt * half;
+        sums.ZtOverF += ztOverF * half;
+        sums.Ng += ng * half;
+        sums.NgOverF += ngOverF * half;
+    }
+
+    private struct Sums
+    {
+        public double Zt;
+        public double ZtOverF;
+        public double Ng;
+        public double NgOverF;
     }
 }

@@ -68,7 +68,7 @@ public static class TiaAnalyzer
         }
 
         var twoKtOverQ = 2 * PhysicalConstants.ThermalVoltage(noiseTemperature).Volts;
-        NoiseResult? noise = options.IncludeNoise ? ComputeNoise(model, zt0, scan.BandwidthHz, options) : null;
+        NoiseResult? noise = options.IncludeNoise ? ComputeNoise(model, zt0, scan, options) : null;
 
         return new AnalysisResult(
             circuit,
@@ -165,7 +165,6 @@ public static class TiaAnalyzer
         var uHi = Math.Log(wHi * ScanMargin);
         var du = Math.Log(10) / pointsPerDecade;
         var n = (int)Math.Ceiling((uHi - uLo) / du);
-        var ratio = Math.Exp(du);
 
         var logTarget = Math.Log(zt0 * zt0 / 2);
         var logZt0Sq = Math.Log(zt0 * zt0);
@@ -180,7 +179,8 @@ public static class TiaAnalyzer
         var prevZ = Math.Log(model.TransimpedanceMagnitudeSquared(w));
         for (var i = 1; i <= n; i++)
         {
-            w *= ratio;
+            // Recomputed, not multiplied up, so a bracket's ends are exactly the points the scan judged.
+            w = Math.Exp(uLo + (i * du));
             var t = model.LogLoopGainMagnitude(w);
             if ((prevT > 0) != (t > 0))
             {
@@ -231,10 +231,23 @@ public static class TiaAnalyzer
             peakHz);
     }
 
-    private static double Refine(Func<double, double> f, double lo, double hi) =>
-        Brent.TryFindRoot(f, lo, hi, RootAccuracy, RootIterations, out var root)
+    /// <summary>
+    /// Brent's method on a bracket from the scan. A scan point can land on the root itself, where rounding
+    /// may give both ends the same sign; the end nearer zero is then the root to working precision.
+    /// </summary>
+    private static double Refine(Func<double, double> f, double lo, double hi)
+    {
+        var fl = f(lo);
+        var fh = f(hi);
+        if ((fl > 0) == (fh > 0) || fl == 0 || fh == 0)
+        {
+            return Math.Abs(fl) <= Math.Abs(fh) ? lo : hi;
+        }
+
+        return Brent.TryFindRoot(f, lo, hi, RootAccuracy, RootIterations, out var root)
             ? root
             : Bisection.FindRoot(f, lo, hi, RootAccuracy, RootIterations);
+    }
 
     /// <summary>Golden-section search for the maximum of a unimodal function on [a, b].</summary>
     private static (double X, double Value) GoldenMax(Func<double, double> f, double a, double b)
@@ -268,19 +281,21 @@ public static class TiaAnalyzer
         return fc > fd ? (c, fc) : (d, fd);
     }
 
-    private static NoiseResult ComputeNoise(TiaModel model, double zt0, double? bandwidthHz, AnalysisOptions options)
+    private static NoiseResult ComputeNoise(TiaModel model, double zt0, ScanResult scan, AnalysisOptions options)
     {
         var c = model.Circuit;
         var isDefault = options.NoiseBandLow is null || options.NoiseBandHigh is null;
         var fLo = options.NoiseBandLow?.Hertz ?? 1.0;
         // Default upper end 10·f−3dB (REFERENCE §4 item 8); without a bandwidth fall back on 10·GBW.
-        var fHi = options.NoiseBandHigh?.Hertz ?? (10 * (bandwidthHz ?? c.Gbw.Hertz));
+        var fHi = options.NoiseBandHigh?.Hertz ?? (10 * (scan.BandwidthHz ?? c.Gbw.Hertz));
         if (!(fLo > 0) || !(fHi > fLo))
         {
             throw new ArgumentOutOfRangeException(nameof(options), $"noise band {fLo} Hz .. {fHi} Hz is empty or not positive");
         }
 
-        var v2 = NoiseIntegrator.Integrate(model, fLo, fHi, options.NoisePanelsPerDecade);
+        // A second-order peak of Mr dB has Q ≈ 10^(Mr/20) when sharp; that sets the panel width near it.
+        var q = Math.Pow(10, scan.PeakingDb / 20);
+        var v2 = NoiseIntegrator.Integrate(model, fLo, fHi, options.NoisePanelsPerDecade, scan.PeakHz, q);
         var rms = new NoiseRms(
             new Voltage(Math.Sqrt(v2.RfThermal)),
             new Voltage(Math.Sqrt(v2.RshThermal)),
