@@ -1,0 +1,322 @@
+using System.Collections.Immutable;
+using MathNet.Numerics.RootFinding;
+using SpecLint.Core.Spec.Model;
+using SpecLint.Core.Units;
+
+namespace SpecLint.Core.Analysis;
+
+/// <summary>
+/// Computes the figures of a TIA operating point (DESIGN §4) from the exact model <see cref="TiaModel"/>.
+/// </summary>
+/// <remarks>
+/// Method: a log-spaced scan over 10⁻³·(lowest) .. 10³·(highest) characteristic frequency brackets every
+/// |T| = 1 crossing and the −3 dB fall, and MathNet's Brent solver refines each bracket to 1e-12 in ln f.
+/// The phase comes from summed pole and zero angles, so it is unwrapped from DC by construction (REFERENCE
+/// §4 item 3). The peak is refined by golden-section search around the largest scan sample.
+/// </remarks>
+public static class TiaAnalyzer
+{
+    private const double RootAccuracy = 1e-12;
+    private const int RootIterations = 200;
+    private const double ScanMargin = 1e3;
+
+    /// <summary>
+    /// Nominal analysis of a spec (DESIGN §5): small-signal and DC figures at the nominal temperature, noise
+    /// at the hottest, integrated over <c>requirements.noise.band</c> when given, else the default band.
+    /// </summary>
+    /// <param name="spec">The spec.</param>
+    public static AnalysisResult Analyze(TiaSpec spec)
+    {
+        ArgumentNullException.ThrowIfNull(spec);
+        var band = spec.Requirements.Noise;
+        return Analyze(CircuitFactory.Nominal(spec), AnalysisOptions.Default with
+        {
+            NoiseBandLow = band?.BandLow,
+            NoiseBandHigh = band?.BandHigh,
+            NoiseTemperature = spec.Conditions.Hottest,
+        });
+    }
+
+    /// <summary>Analyses one operating point.</summary>
+    /// <param name="circuit">The operating point.</param>
+    /// <param name="options">What to compute; <see cref="AnalysisOptions.WithoutNoise"/> for the fast path.</param>
+    public static AnalysisResult Analyze(Circuit circuit, AnalysisOptions options)
+    {
+        ArgumentNullException.ThrowIfNull(circuit);
+        ArgumentNullException.ThrowIfNull(options);
+        var noiseTemperature = options.NoiseTemperature ?? circuit.Temperature;
+        var model = new TiaModel(circuit, noiseTemperature);
+
+        var rf = circuit.Rf.Ohms;
+        var gsh = circuit.Rsh is { } rsh ? 1 / rsh.Ohms : 0;
+        var cfb = circuit.FeedbackCapacitance.Farads;
+        var cin = circuit.Cin.Farads;
+        var zt0 = Math.Sqrt(model.TransimpedanceMagnitudeSquared(0));
+
+        var scan = Scan(model, zt0, options.ScanPointsPerDecade);
+
+        Angle? pm = null;
+        Frequency? crossover = null;
+        foreach (var c in scan.Crossings)
+        {
+            if (c.Direction == CrossingDirection.Falling)
+            {
+                pm = c.Margin;
+                crossover = c.Frequency;
+                break;
+            }
+        }
+
+        var twoKtOverQ = 2 * PhysicalConstants.ThermalVoltage(noiseTemperature).Volts;
+        NoiseResult? noise = options.IncludeNoise ? ComputeNoise(model, zt0, scan, options) : null;
+
+        return new AnalysisResult(
+            circuit,
+            new Resistance(zt0),
+            circuit.A0.Linear / (1 + (rf * gsh)),
+            scan.BandwidthHz is { } bw ? new Frequency(bw) : null,
+            scan.PeakingDb,
+            scan.PeakHz is { } pk ? new Frequency(pk) : null,
+            pm,
+            crossover,
+            scan.Crossings,
+            1 + (rf * gsh),
+            cfb > 0 ? 1 + (cin / cfb) : double.PositiveInfinity,
+            cfb > 0 ? new Frequency(1 / (2 * Math.PI * rf * cfb)) : null,
+            cin + cfb > 0 ? new Frequency(((1 / rf) + gsh) / (2 * Math.PI * (cin + cfb))) : null,
+            DcOutput(circuit),
+            Math.Abs(circuit.Imin.Amperes) * rf / twoKtOverQ,
+            noise);
+    }
+
+    /// <summary>
+    /// The exact DC output with finite A0 (REFERENCE §2 notes), for a signal current leaving the node
+    /// (<paramref name="outOfNodeAmperes"/>, dark current included) and given offset and bias current.
+    /// </summary>
+    /// <remarks>
+    /// KCL at the inverting node with vo = A0·(Vbias + Vos − vn), the sensor's far end at Vbias and Ib leaving
+    /// the node: vo = (vp/Rf + Vos/Rsh + Ib + Iout) / ((1 + 1/A0)/Rf + 1/(A0·Rsh)), vp = Vbias + Vos.
+    /// </remarks>
+    /// <param name="circuit">The operating point (its Vbias, Rf, Rsh, A0).</param>
+    /// <param name="outOfNodeAmperes">Total DC current drawn out of the summing node by the sensor.</param>
+    /// <param name="vosVolts">Offset voltage in series with the + input.</param>
+    /// <param name="ibAmperes">Bias current flowing from the node into the op-amp pin.</param>
+    public static Voltage ExactDcOutput(Circuit circuit, double outOfNodeAmperes, double vosVolts, double ibAmperes)
+    {
+        ArgumentNullException.ThrowIfNull(circuit);
+        var gf = 1 / circuit.Rf.Ohms;
+        var gsh = circuit.Rsh is { } rsh ? 1 / rsh.Ohms : 0;
+        var invA0 = 1 / circuit.A0.Linear;
+        var vp = circuit.Vbias.Volts + vosVolts;
+        var num = (vp * gf) + (vosVolts * gsh) + ibAmperes + outOfNodeAmperes;
+        return new Voltage(num / ((gf * (1 + invA0)) + (gsh * invA0)));
+    }
+
+    private static OutputRange DcOutput(Circuit c)
+    {
+        var rf = c.Rf.Ohms;
+        var pol = c.Polarity;
+        var idleCurrent = pol * c.Idark.Amperes;
+        var fullCurrent = pol * (c.Imax.Amperes + c.Idark.Amperes);
+        var idle = c.Vbias.Volts + (idleCurrent * rf);
+        var full = c.Vbias.Volts + (fullCurrent * rf);
+        var rfOverRsh = c.Rsh is { } rsh ? rf / rsh.Ohms : 0;
+        var vos = Math.Abs(c.Vos.Volts);
+        var ib = Math.Abs(c.Ib.Amperes);
+        var err = (vos * (1 + rfOverRsh)) + (ib * rf);
+
+        var minExact = double.PositiveInfinity;
+        var maxExact = double.NegativeInfinity;
+        foreach (var i in (ReadOnlySpan<double>)[idleCurrent, fullCurrent])
+        {
+            for (var sv = -1; sv <= 1; sv += 2)
+            {
+                for (var sb = -1; sb <= 1; sb += 2)
+                {
+                    var v = ExactDcOutput(c, i, sv * vos, sb * ib).Volts;
+                    minExact = Math.Min(minExact, v);
+                    maxExact = Math.Max(maxExact, v);
+                }
+            }
+        }
+
+        return new OutputRange(
+            new Voltage(idle),
+            new Voltage(full),
+            new Voltage(err),
+            new Voltage(Math.Min(idle, full) - err),
+            new Voltage(Math.Max(idle, full) + err),
+            new Voltage(minExact),
+            new Voltage(maxExact),
+            c.SupplyNegative + c.SwingToNegative,
+            c.SupplyPositive - c.SwingToPositive);
+    }
+
+    private readonly record struct ScanResult(
+        ImmutableArray<LoopCrossing> Crossings,
+        double? BandwidthHz,
+        double PeakingDb,
+        double? PeakHz);
+
+    private static ScanResult Scan(TiaModel model, double zt0, int pointsPerDecade)
+    {
+        var (wLo, wHi) = model.CharacteristicRange();
+        var uLo = Math.Log(wLo / ScanMargin);
+        var uHi = Math.Log(wHi * ScanMargin);
+        var du = Math.Log(10) / pointsPerDecade;
+        var n = (int)Math.Ceiling((uHi - uLo) / du);
+
+        var logTarget = Math.Log(zt0 * zt0 / 2);
+        var logZt0Sq = Math.Log(zt0 * zt0);
+
+        var crossings = ImmutableArray.CreateBuilder<LoopCrossing>(2);
+        double? bandwidthU = null;
+        var peakLog = logZt0Sq;
+        var peakIndex = -1;
+
+        var w = Math.Exp(uLo);
+        var prevT = model.LogLoopGainMagnitude(w);
+        var prevZ = Math.Log(model.TransimpedanceMagnitudeSquared(w));
+        for (var i = 1; i <= n; i++)
+        {
+            // Recomputed, not multiplied up, so a bracket's ends are exactly the points the scan judged.
+            w = Math.Exp(uLo + (i * du));
+            var t = model.LogLoopGainMagnitude(w);
+            if ((prevT > 0) != (t > 0))
+            {
+                var u = Refine(u => model.LogLoopGainMagnitude(Math.Exp(u)), uLo + ((i - 1) * du), uLo + (i * du));
+                var wc = Math.Exp(u);
+                crossings.Add(new LoopCrossing(
+                    new Frequency(wc / (2 * Math.PI)),
+                    t > 0 ? CrossingDirection.Rising : CrossingDirection.Falling,
+                    new Angle(model.LoopGainPhaseRadians(wc))));
+            }
+
+            var z = Math.Log(model.TransimpedanceMagnitudeSquared(w));
+            if (bandwidthU is null && prevZ > logTarget && z <= logTarget)
+            {
+                bandwidthU = Refine(
+                    u => Math.Log(model.TransimpedanceMagnitudeSquared(Math.Exp(u))) - logTarget,
+                    uLo + ((i - 1) * du),
+                    uLo + (i * du));
+            }
+
+            if (z > peakLog)
+            {
+                peakLog = z;
+                peakIndex = i;
+            }
+
+            prevT = t;
+            prevZ = z;
+        }
+
+        double peakingDb = 0;
+        double? peakHz = null;
+        if (peakIndex > 0)
+        {
+            var (uPeak, logPeak) = GoldenMax(
+                u => Math.Log(model.TransimpedanceMagnitudeSquared(Math.Exp(u))),
+                uLo + ((peakIndex - 1) * du),
+                uLo + ((peakIndex + 1) * du));
+            // 10·log10 of a power ratio held as a natural log.
+            peakingDb = Math.Max(0, (logPeak - logZt0Sq) * 10 / Math.Log(10));
+            peakHz = peakingDb > 0 ? Math.Exp(uPeak) / (2 * Math.PI) : null;
+        }
+
+        return new ScanResult(
+            crossings.DrainToImmutable(),
+            bandwidthU is { } ub ? Math.Exp(ub) / (2 * Math.PI) : null,
+            peakingDb,
+            peakHz);
+    }
+
+    /// <summary>
+    /// Brent's method on a bracket from the scan. A scan point can land on the root itself, where rounding
+    /// may give both ends the same sign; the end nearer zero is then the root to working precision.
+    /// </summary>
+    private static double Refine(Func<double, double> f, double lo, double hi)
+    {
+        var fl = f(lo);
+        var fh = f(hi);
+        if ((fl > 0) == (fh > 0) || fl == 0 || fh == 0)
+        {
+            return Math.Abs(fl) <= Math.Abs(fh) ? lo : hi;
+        }
+
+        return Brent.TryFindRoot(f, lo, hi, RootAccuracy, RootIterations, out var root)
+            ? root
+            : Bisection.FindRoot(f, lo, hi, RootAccuracy, RootIterations);
+    }
+
+    /// <summary>Golden-section search for the maximum of a unimodal function on [a, b].</summary>
+    private static (double X, double Value) GoldenMax(Func<double, double> f, double a, double b)
+    {
+        var invPhi = (Math.Sqrt(5) - 1) / 2;
+        var c = b - (invPhi * (b - a));
+        var d = a + (invPhi * (b - a));
+        var fc = f(c);
+        var fd = f(d);
+        // 40 steps shrink the bracket by 0.618^40 ≈ 4e-9; the peak value is quadratic in the error, so exact.
+        for (var i = 0; i < 40; i++)
+        {
+            if (fc > fd)
+            {
+                b = d;
+                d = c;
+                fd = fc;
+                c = b - (invPhi * (b - a));
+                fc = f(c);
+            }
+            else
+            {
+                a = c;
+                c = d;
+                fc = fd;
+                d = a + (invPhi * (b - a));
+                fd = f(d);
+            }
+        }
+
+        return fc > fd ? (c, fc) : (d, fd);
+    }
+
+    private static NoiseResult ComputeNoise(TiaModel model, double zt0, ScanResult scan, AnalysisOptions options)
+    {
+        var c = model.Circuit;
+        var isDefault = options.NoiseBandLow is null || options.NoiseBandHigh is null;
+        var fLo = options.NoiseBandLow?.Hertz ?? 1.0;
+        // Default upper end 10·f−3dB (REFERENCE §4 item 8); without a bandwidth fall back on 10·GBW.
+        var fHi = options.NoiseBandHigh?.Hertz ?? (10 * (scan.BandwidthHz ?? c.Gbw.Hertz));
+        if (!(fLo > 0) || !(fHi > fLo))
+        {
+            throw new ArgumentOutOfRangeException(nameof(options), $"noise band {fLo} Hz .. {fHi} Hz is empty or not positive");
+        }
+
+        // A second-order peak of Mr dB has Q ≈ 10^(Mr/20) when sharp; that sets the panel width near it.
+        var q = Math.Pow(10, scan.PeakingDb / 20);
+        var v2 = NoiseIntegrator.Integrate(model, fLo, fHi, options.NoisePanelsPerDecade, scan.PeakHz, q);
+        var rms = new NoiseRms(
+            new Voltage(Math.Sqrt(v2.RfThermal)),
+            new Voltage(Math.Sqrt(v2.RshThermal)),
+            new Voltage(Math.Sqrt(v2.Shot)),
+            new Voltage(Math.Sqrt(v2.CurrentNoise)),
+            new Voltage(Math.Sqrt(v2.VoltageNoise)));
+        var total = Math.Sqrt(v2.Total);
+        var input = total / zt0;
+        var imin = Math.Abs(c.Imin.Amperes);
+        var spot = Math.Sqrt(fLo * fHi);
+        return new NoiseResult(
+            new Frequency(fLo),
+            new Frequency(fHi),
+            isDefault,
+            model.NoiseTemperature,
+            rms,
+            new Voltage(total),
+            new Current(input),
+            imin > 0 ? 20 * Math.Log10(imin * zt0 / total) : null,
+            c.Responsivity is { AmperesPerWatt: > 0 } r ? new Power(input / r.AmperesPerWatt) : null,
+            new Frequency(spot),
+            model.OutputNoise(new Frequency(spot)));
+    }
+}
