@@ -23,7 +23,7 @@ public static class CfForFloor
     public static Capacitance? Value(RuleContext context, Angle floor, Func<SpecAnalysis, bool>? alsoRequire = null)
     {
         ArgumentNullException.ThrowIfNull(context);
-        var start = DesignHelpers.CfForPhaseMargin(context.Circuit, floor) is { } exact ? exact.Farads : context.Circuit.Cf.Farads;
+        var start = DesignHelpers.FeedbackCapacitanceForPhaseMargin(context.Circuit, floor) is { } exact ? exact.Farads : context.Circuit.Cf.Farads;
         if (!(start > 0))
         {
             start = 0.1e-12;

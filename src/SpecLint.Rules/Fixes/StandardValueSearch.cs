@@ -37,7 +37,7 @@ public static class StandardValueSearch
             return null;
         }
 
-        var candidate = upward ? series.AtOrAbove(start) : series.AtOrBelow(start);
+        var candidate = upward ? series.NextUpOrEqual(start) : series.NextDownOrEqual(start);
         for (var i = 0; i < steps; i++)
         {
             if (accept(candidate))
@@ -45,7 +45,7 @@ public static class StandardValueSearch
                 return candidate;
             }
 
-            candidate = upward ? series.Above(candidate) : series.Below(candidate);
+            candidate = upward ? series.NextUp(candidate) : series.NextDown(candidate);
         }
 
         return null;
