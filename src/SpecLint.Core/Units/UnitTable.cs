@@ -21,7 +21,7 @@ public static class UnitTable
     private static readonly UnitSymbol[] All =
     [
         new("Ω", Dimension.Resistance, 0, true),
-        new("Ω", Dimension.Resistance, 0, true), // U+2126 OHM SIGN
+        new("\u2126", Dimension.Resistance, 0, true), // U+2126 OHM SIGN, written as an escape so editors cannot fold it into U+03A9
         new("ohm", Dimension.Resistance, 0, true),
         new("ohms", Dimension.Resistance, 0, true),
         new("Ohm", Dimension.Resistance, 0, true),
