@@ -119,29 +119,10 @@ public static class SarifWriter
     /// </summary>
     public static string ArtifactUri(string file, string? repositoryRoot)
     {
-        ArgumentNullException.ThrowIfNull(file);
-        var path = file;
-        if (repositoryRoot is not null && Path.IsPathRooted(path))
-        {
-            var relative = Path.GetRelativePath(repositoryRoot, path);
-            if (!relative.StartsWith("..", StringComparison.Ordinal) && !Path.IsPathRooted(relative))
-            {
-                path = relative;
-            }
-        }
-
-        if (Path.IsPathRooted(path))
-        {
-            return new Uri(path).AbsoluteUri;
-        }
-
-        path = path.Replace('\\', '/');
-        while (path.StartsWith("./", StringComparison.Ordinal))
-        {
-            path = path[2..];
-        }
-
-        return string.Join('/', path.Split('/').Select(Uri.EscapeDataString));
+        var path = RepositoryPath.Relative(file, repositoryRoot);
+        return Path.IsPathRooted(path)
+            ? new Uri(path).AbsoluteUri
+            : string.Join('/', path.Split('/').Select(Uri.EscapeDataString));
     }
 
     private static void WriteRule(Utf8JsonWriter json, RuleDescriptor rule, string? page)
