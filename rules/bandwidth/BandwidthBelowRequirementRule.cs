@@ -1,3 +1,4 @@
+using SpecLint.Core.Analysis;
 using SpecLint.Core.Units;
 using SpecLint.Rules.Engine;
 using SpecLint.Rules.Fixes;

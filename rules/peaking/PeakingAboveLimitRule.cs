@@ -1,3 +1,4 @@
+using SpecLint.Core.Analysis;
 using System.Globalization;
 using SpecLint.Core.Units;
 using SpecLint.Rules.Engine;

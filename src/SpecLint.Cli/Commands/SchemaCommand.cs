@@ -1,5 +1,5 @@
 using System.CommandLine;
-using SpecLint.Core.Spec;
+using SpecLint.Core.Spec.Schema;
 
 namespace SpecLint.Cli.Commands;
 
@@ -12,7 +12,7 @@ internal static class SchemaCommand
         var command = new Command("schema", "Print the JSON Schema (draft-07) for spec files, for editors and other tools") { config };
         command.SetAction(parse =>
         {
-            var text = parse.GetValue(config) ? SpecSchema.ConfigText : SpecSchema.Text;
+            var text = parse.GetValue(config) ? ConfigSchema.Text : SpecSchema.Text;
             parse.InvocationConfiguration.Output.Write(text.EndsWith('\n') ? text : text + "\n");
             return 0;
         });

@@ -58,7 +58,7 @@ public sealed class DesignHelpersTests
     [Fact]
     public void Largest_Rf_for_a_current_into_the_node_is_set_by_the_low_side()
     {
-        var c = TestCircuits.Photodiode with { Direction = Spec.Model.CurrentDirection.IntoNode, Vbias = new Voltage(4) };
+        var c = TestCircuits.Photodiode with { Direction = SpecLint.Core.Spec.Model.CurrentDirection.IntoNode, Vbias = new Voltage(4) };
         var rf = DesignHelpers.LargestRfForHeadroom(c, Voltage.Zero)!.Value;
         var r = TiaAnalyzer.Analyze(c with { Rf = rf }, AnalysisOptions.WithoutNoise);
         Assert.Equal(r.Output.LowLimit.Volts, r.Output.Min.Volts, 1e-9);
