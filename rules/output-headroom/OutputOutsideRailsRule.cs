@@ -24,7 +24,7 @@ public sealed class OutputOutsideRailsRule : IRule
     {
         ArgumentNullException.ThrowIfNull(context);
         var spec = context.Spec;
-        var margin = context.Option<Voltage>(Margin.Key);
+        var margin = context.OptionOf<Voltage>(Info, Margin.Key);
         var high = spec.Conditions.SupplyPositive.Min - spec.Amplifier.SwingToPositive - margin;
         var low = spec.Conditions.SupplyNegative.Max + spec.Amplifier.SwingToNegative + margin;
         return (low, high);
@@ -49,12 +49,12 @@ public sealed class OutputOutsideRailsRule : IRule
         var problems = new List<string>();
         if (o.MaxExact > span.High)
         {
-            problems.Add($"the output reaches {Fmt.Q(o.MaxExact)}, above the {Fmt.Q(span.High)} limit (positive rail {Fmt.Q(spec.Conditions.SupplyPositive.Min)} at the low end of its tolerance, less {Fmt.Q(spec.Amplifier.SwingToPositive)} swing limit and {Fmt.Q(context.Option<Voltage>(Margin.Key))} margin)");
+            problems.Add($"the output reaches {Fmt.Q(o.MaxExact)}, above the {Fmt.Q(span.High)} limit (positive rail {Fmt.Q(spec.Conditions.SupplyPositive.Min)} at the low end of its tolerance, less {Fmt.Q(spec.Amplifier.SwingToPositive)} swing limit and {Fmt.Q(context.OptionOf<Voltage>(Info, Margin.Key))} margin)");
         }
 
         if (o.MinExact < span.Low)
         {
-            problems.Add($"the output goes down to {Fmt.Q(o.MinExact)}, below the {Fmt.Q(span.Low)} limit (negative rail {Fmt.Q(spec.Conditions.SupplyNegative.Max)}, plus {Fmt.Q(spec.Amplifier.SwingToNegative)} swing limit and {Fmt.Q(context.Option<Voltage>(Margin.Key))} margin)");
+            problems.Add($"the output goes down to {Fmt.Q(o.MinExact)}, below the {Fmt.Q(span.Low)} limit (negative rail {Fmt.Q(spec.Conditions.SupplyNegative.Max)}, plus {Fmt.Q(spec.Amplifier.SwingToNegative)} swing limit and {Fmt.Q(context.OptionOf<Voltage>(Info, Margin.Key))} margin)");
         }
 
         var rf = LargestFittingRf(context, span);
@@ -73,7 +73,7 @@ public sealed class OutputOutsideRailsRule : IRule
         var spec = context.Spec;
         var series = StandardValueSearch.SeriesFor<Resistance>(spec.Feedback.Resistance, ESeries.E96);
         var worstRails = context.Circuit with { SupplyPositive = spec.Conditions.SupplyPositive.Min, SupplyNegative = spec.Conditions.SupplyNegative.Max };
-        var start = DesignHelpers.LargestRfForHeadroom(worstRails, context.Option<Voltage>(Margin.Key)) is { } r && double.IsFinite(r.Ohms) ? r.Ohms : spec.Feedback.Resistance.Typ.Ohms;
+        var start = DesignHelpers.LargestRfForHeadroom(worstRails, context.OptionOf<Voltage>(Info, Margin.Key)) is { } r && double.IsFinite(r.Ohms) ? r.Ohms : spec.Feedback.Resistance.Typ.Ohms;
         var found = StandardValueSearch.Find(series, Math.Min(start, spec.Feedback.Resistance.Typ.Ohms), upward: false, candidate =>
             Fits(context.Reanalyze(SpecEdits.WithRf(spec, new Resistance(candidate))).Analysis.Output, span), steps: 24);
         return found is { } f ? new Resistance(f) : null;

@@ -10,7 +10,7 @@ internal static partial class RulePage
     /// <summary>The first paragraph under "## What it flags" as plain text, or null.</summary>
     public static string? WhatItFlags(string markdown)
     {
-        var doc = Markdown.Parse(markdown);
+        var doc = Markdig.Markdown.Parse(markdown);
         var inSection = false;
         foreach (var block in doc)
         {
@@ -22,7 +22,7 @@ internal static partial class RulePage
 
             if (inSection && block is ParagraphBlock paragraph)
             {
-                return Collapse(Markdown.ToPlainText(markdown.Substring(paragraph.Span.Start, paragraph.Span.Length)));
+                return Collapse(Markdig.Markdown.ToPlainText(markdown.Substring(paragraph.Span.Start, paragraph.Span.Length)));
             }
         }
 
@@ -30,7 +30,7 @@ internal static partial class RulePage
     }
 
     /// <summary>The whole page as plain text, for SARIF's required <c>help.text</c>.</summary>
-    public static string PlainText(string markdown) => Markdown.ToPlainText(markdown).Replace("\r\n", "\n", StringComparison.Ordinal).Trim();
+    public static string PlainText(string markdown) => Markdig.Markdown.ToPlainText(markdown).Replace("\r\n", "\n", StringComparison.Ordinal).Trim();
 
     private static string Inline(HeadingBlock heading) => heading.Inline is null ? "" : string.Concat(heading.Inline.Descendants<Markdig.Syntax.Inlines.LiteralInline>().Select(l => l.Content.ToString()));
 
