@@ -97,7 +97,7 @@ public static class DesignHelpers
         var i = Math.Abs(imin.Amperes);
         if (!(i > 0))
         {
-            throw new ArgumentOutOfRangeException(nameof(imin), imin, "a zero current is never shot-noise limited");
+            throw new ArgumentOutOfRangeException(nameof(imin), imin.Amperes, "a zero current is never shot-noise limited");
         }
 
         return new Resistance(2 * PhysicalConstants.ThermalVoltage(hottest).Volts / i);

@@ -290,7 +290,7 @@ public static class TiaAnalyzer
         var fHi = options.NoiseBandHigh?.Hertz ?? (10 * (scan.BandwidthHz ?? c.Gbw.Hertz));
         if (!(fLo > 0) || !(fHi > fLo))
         {
-            throw new ArgumentOutOfRangeException(nameof(options), $"noise band {fLo} Hz .. {fHi} Hz is empty or not positive");
+            throw new ArgumentOutOfRangeException(nameof(options), FormattableString.Invariant($"noise band {fLo} Hz .. {fHi} Hz is empty or not positive"));
         }
 
         // A second-order peak of Mr dB has Q ≈ 10^(Mr/20) when sharp; that sets the panel width near it.

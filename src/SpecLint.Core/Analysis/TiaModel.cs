@@ -49,17 +49,17 @@ public sealed class TiaModel
         var rf = circuit.Rf.Ohms;
         if (!(rf > 0) || double.IsInfinity(rf))
         {
-            throw new ArgumentOutOfRangeException(nameof(circuit), circuit.Rf, "Rf must be positive and finite");
+            throw new ArgumentOutOfRangeException(nameof(circuit), circuit.Rf.Ohms, "Rf must be positive and finite");
         }
 
         if (!(circuit.Gbw.Hertz > 0))
         {
-            throw new ArgumentOutOfRangeException(nameof(circuit), circuit.Gbw, "GBW must be positive");
+            throw new ArgumentOutOfRangeException(nameof(circuit), circuit.Gbw.Hertz, "GBW must be positive");
         }
 
         if (!(circuit.A0.Linear > 0))
         {
-            throw new ArgumentOutOfRangeException(nameof(circuit), circuit.A0, "A0 must be positive");
+            throw new ArgumentOutOfRangeException(nameof(circuit), circuit.A0.Linear, "A0 must be positive");
         }
 
         Circuit = circuit;
