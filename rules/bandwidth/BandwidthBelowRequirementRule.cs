@@ -52,9 +52,9 @@ public sealed class BandwidthBelowRequirementRule : IRule
         }
 
         var series = StandardValueSearch.SeriesFor<Capacitance>(cf, ESeries.E12);
-        var found = StandardValueSearch.Find(series, cf.Typ.Farads, upward: false, candidate =>
+        var found = StandardValueSearch.Find(context, series, cf.Typ.Farads, upward: false, c => SpecEdits.WithCf(context.Spec, new Capacitance(c)), edited =>
         {
-            var r = context.Reanalyze(SpecEdits.WithCf(context.Spec, new Capacitance(candidate)));
+            var r = context.Reanalyze(edited);
             return r.WorstBandwidthHz is { } b && b >= required.Hertz && r.WorstPhaseMarginDeg is { } p && p >= floor.Degrees;
         }, steps: 24);
         return found is { } f ? new Capacitance(f) : null;

@@ -67,9 +67,8 @@ public sealed class NoiseGainBelowMinimumStableRule : IRule
         }
 
         var series = StandardValueSearch.SeriesFor(spec.Feedback.Capacitance, ESeries.E12);
-        var found = StandardValueSearch.Find(series, start, upward: false, candidate =>
+        var found = StandardValueSearch.Find(context, series, start, upward: false, c => SpecEdits.WithCf(spec, new Capacitance(c)), edited =>
         {
-            var edited = SpecEdits.WithCf(spec, new Capacitance(candidate));
             if (WorstNoiseGain(edited) < gmin)
             {
                 return false;

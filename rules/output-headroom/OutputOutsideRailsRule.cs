@@ -74,8 +74,8 @@ public sealed class OutputOutsideRailsRule : IRule
         var series = StandardValueSearch.SeriesFor<Resistance>(spec.Feedback.Resistance, ESeries.E96);
         var worstRails = context.Circuit with { SupplyPositive = spec.Conditions.SupplyPositive.Min, SupplyNegative = spec.Conditions.SupplyNegative.Max };
         var start = DesignHelpers.LargestRfForHeadroom(worstRails, context.OptionOf<Voltage>(Info, Margin.Key)) is { } r && double.IsFinite(r.Ohms) ? r.Ohms : spec.Feedback.Resistance.Typ.Ohms;
-        var found = StandardValueSearch.Find(series, Math.Min(start, spec.Feedback.Resistance.Typ.Ohms), upward: false, candidate =>
-            Fits(context.Reanalyze(SpecEdits.WithRf(spec, new Resistance(candidate))).Analysis.Output, span), steps: 24);
+        var found = StandardValueSearch.Find(context, series, Math.Min(start, spec.Feedback.Resistance.Typ.Ohms), upward: false,
+            c => SpecEdits.WithRf(spec, new Resistance(c)), edited => Fits(context.Reanalyze(edited).Analysis.Output, span), steps: 24);
         return found is { } f ? new Resistance(f) : null;
     }
 }

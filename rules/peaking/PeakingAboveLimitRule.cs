@@ -45,11 +45,11 @@ public sealed class PeakingAboveLimitRule : IRule
 
     private static Capacitance? SmallestCfWithin(RuleContext context, double limitDb)
     {
-        var start = context.Circuit.Cf.Farads > 0 ? context.Circuit.Cf.Farads : 0.1e-12;
+        var start = Math.Max(context.Circuit.Cf.Farads, CfForFloor.SmallestPart(context).Farads);
         var series = StandardValueSearch.SeriesFor(context.Spec.Feedback.Capacitance, ESeries.E12);
-        var found = StandardValueSearch.Find(series, start, upward: true, candidate =>
+        var found = StandardValueSearch.Find(context, series, start, upward: true, c => SpecEdits.WithCf(context.Spec, new Capacitance(c)), edited =>
         {
-            var r = context.Reanalyze(SpecEdits.WithCf(context.Spec, new Capacitance(candidate)));
+            var r = context.Reanalyze(edited);
             var peak = Math.Max(r.Analysis.PeakingDb, r.Tolerances?.PeakingDbMax ?? double.NegativeInfinity);
             return peak <= limitDb;
         }, steps: 24);

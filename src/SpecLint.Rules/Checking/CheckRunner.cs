@@ -83,22 +83,7 @@ public static class CheckRunner
                 [new Finding(RuleIds.AnalysisFailed, Severity.Error, spec.File, "", at.Line, at.Column, $"the analysis did not converge ({e.Message}); check the values for a typo in a prefix")]);
         }
 
-        var findings = new List<Finding>();
-        foreach (var rule in options.Catalog.Rules)
-        {
-            var ruleConfig = ConfigurationBinding.For(config, rule.Descriptor.Id);
-            if (ruleConfig.Off)
-            {
-                continue;
-            }
-
-            var context = new RuleContext(analysis, analyzer, rule.Descriptor, ruleConfig, id => ConfigurationBinding.For(config, id));
-            foreach (var f in rule.Check(context))
-            {
-                findings.Add(ruleConfig.Severity is { } s ? f with { Severity = s } : f);
-            }
-        }
-
+        var findings = new RuleRunner(options.Catalog, config, analyzer).Run(analysis);
         var all = WaiverApplication.Apply(spec, findings, options.Today, options.Catalog.KnownIds)
             .OrderBy(f => f.Line).ThenBy(f => f.Column).ThenBy(f => f.RuleId, StringComparer.Ordinal).ThenBy(f => f.Message, StringComparer.Ordinal)
             .ToImmutableArray();

@@ -47,6 +47,21 @@ public sealed partial class RuleContext
     /// <summary>Tolerance corners and Monte Carlo, or null when nothing in the spec varies.</summary>
     public ToleranceResult? Tolerances => Current.Tolerances;
 
+    /// <summary>
+    /// False while the engine re-checks another rule's fix: rules then report findings only and do not
+    /// search for fixes of their own (which keeps verification cheap and free of recursion).
+    /// </summary>
+    public bool SearchFixes { get; init; } = true;
+
+    /// <summary>Runs the other enabled rules on a candidate spec and tells whether any error-level rule that was clean now fails.</summary>
+    public Func<TiaSpec, string, bool>? OtherRulesCheck { get; init; }
+
+    /// <summary>
+    /// True when <paramref name="candidate"/> trips no error-level rule (besides this one) that passes for the
+    /// current spec: a fix must not trade one error for another.
+    /// </summary>
+    public bool LeavesOtherRulesClean(TiaSpec candidate) => OtherRulesCheck?.Invoke(candidate, _descriptor.Id) ?? true;
+
     /// <summary>Analyses a changed spec, the way a rule re-checks a fix before suggesting it.</summary>
     public SpecAnalysis Reanalyze(TiaSpec changed, bool includeNoise = false) =>
         _analyzer.Analyze(changed, includeNoise, includeCorners: Current.Tolerances is not null);

@@ -19,20 +19,27 @@ public static class CfForFloor
         return cf is { } c ? new FixSuggestion("/feedback/capacitance", SpecEdits.CfText(context.Spec, c)) : null;
     }
 
+    /// <summary>
+    /// The smallest capacitor a fix may suggest: the <c>feedback-capacitor-size</c> rule's <c>min</c>, so that one
+    /// rule's fix does not trip another (below it, layout parasitics decide the response).
+    /// </summary>
+    public static Capacitance SmallestPart(RuleContext context)
+    {
+        ArgumentNullException.ThrowIfNull(context);
+        return context.OptionOf<Capacitance>(BuiltIn.FeedbackCapacitorTooSmallRule.Info, BuiltIn.FeedbackCapacitorTooSmallRule.Min.Key);
+    }
+
     /// <summary>The capacitance itself, or null.</summary>
     public static Capacitance? Value(RuleContext context, Angle floor, Func<SpecAnalysis, bool>? alsoRequire = null)
     {
         ArgumentNullException.ThrowIfNull(context);
         var start = DesignHelpers.FeedbackCapacitanceForPhaseMargin(context.Circuit, floor) is { } exact ? exact.Farads : context.Circuit.Cf.Farads;
-        if (!(start > 0))
-        {
-            start = 0.1e-12;
-        }
+        start = Math.Max(start, SmallestPart(context).Farads);
 
         var series = StandardValueSearch.SeriesFor(context.Spec.Feedback.Capacitance, ESeries.E12);
-        var found = StandardValueSearch.Find(series, start, upward: true, candidate =>
+        var found = StandardValueSearch.Find(context, series, start, upward: true, c => SpecEdits.WithCf(context.Spec, new Capacitance(c)), edited =>
         {
-            var r = context.Reanalyze(SpecEdits.WithCf(context.Spec, new Capacitance(candidate)));
+            var r = context.Reanalyze(edited);
             return r.WorstPhaseMarginDeg is { } w && w >= floor.Degrees && (alsoRequire?.Invoke(r) ?? true);
         }, steps: 24);
         return found is { } f ? new Capacitance(f) : null;

@@ -27,4 +27,22 @@ public static class SpecEdits
 
     /// <summary>The text a fix writes at /feedback/resistance for <paramref name="rf"/>, keeping the tolerance as written.</summary>
     public static string RfText(TiaSpec spec, Resistance rf) => spec.Feedback.Resistance.TextAt(rf);
+
+    /// <summary>The JSON Pointer of the part that differs between two versions of a spec, or null.</summary>
+    public static string? ChangedPointer(TiaSpec original, TiaSpec candidate)
+    {
+        ArgumentNullException.ThrowIfNull(original);
+        ArgumentNullException.ThrowIfNull(candidate);
+        if (original.Feedback.Capacitance != candidate.Feedback.Capacitance)
+        {
+            return "/feedback/capacitance";
+        }
+
+        if (original.Feedback.Resistance != candidate.Feedback.Resistance)
+        {
+            return "/feedback/resistance";
+        }
+
+        return original.Feedback.Dielectric != candidate.Feedback.Dielectric ? "/feedback/dielectric" : null;
+    }
 }

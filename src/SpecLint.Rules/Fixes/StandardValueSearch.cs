@@ -1,5 +1,7 @@
 using SpecLint.Core.Analysis;
+using SpecLint.Core.Spec.Model;
 using SpecLint.Core.Units;
+using SpecLint.Rules.Engine;
 
 namespace SpecLint.Rules.Fixes;
 
@@ -12,7 +14,10 @@ public static class StandardValueSearch
     /// <summary>The default number of candidates tried before giving up.</summary>
     public const int DefaultSteps = 12;
 
-    /// <summary>The series a part's tolerance implies (IEC 60063), for a spread of this quantity.</summary>
+    /// <summary>
+    /// The series a part's tolerance implies (IEC 60063), for a spread of this quantity. Capacitors stop at
+    /// E24: ceramic capacitors are stocked in E12/E24 values whatever their tolerance (common practice).
+    /// </summary>
     public static ESeries SeriesFor<T>(Spread<T>? spread, ESeries whenExact)
         where T : struct, IQuantity<T>
     {
@@ -21,7 +26,8 @@ public static class StandardValueSearch
             return whenExact;
         }
 
-        return ESeries.ForTolerance(s.RelativeTolerance);
+        var series = ESeries.ForTolerance(s.RelativeTolerance);
+        return T.Dimension == Dimension.Capacitance && series.Values.Length > ESeries.E24.Values.Length ? ESeries.E24 : series;
     }
 
     /// <summary>
@@ -49,5 +55,34 @@ public static class StandardValueSearch
         }
 
         return null;
+    }
+
+    /// <summary>
+    /// The fix search rules use: walks the series, builds the edited spec for each candidate, and accepts the
+    /// first one that passes the rule's own check and trips no error-level rule that was clean before. Returns
+    /// null without searching while the engine is verifying another rule's fix.
+    /// </summary>
+    public static double? Find(
+        RuleContext context,
+        ESeries series,
+        double start,
+        bool upward,
+        Func<double, TiaSpec> edit,
+        Func<TiaSpec, bool> accept,
+        int steps = DefaultSteps)
+    {
+        ArgumentNullException.ThrowIfNull(context);
+        ArgumentNullException.ThrowIfNull(edit);
+        ArgumentNullException.ThrowIfNull(accept);
+        if (!context.SearchFixes)
+        {
+            return null;
+        }
+
+        return Find(series, start, upward, candidate =>
+        {
+            var edited = edit(candidate);
+            return accept(edited) && context.LeavesOtherRulesClean(edited);
+        }, steps);
     }
 }

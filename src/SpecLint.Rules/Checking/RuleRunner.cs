@@ -1,0 +1,74 @@
+using SpecLint.Core.Config;
+using SpecLint.Core.Spec.Model;
+using SpecLint.Rules.Engine;
+
+namespace SpecLint.Rules.Checking;
+
+/// <summary>
+/// Runs every enabled rule on one analysed spec, with configuration applied. Fix searches get a check that
+/// re-runs the other rules on each candidate, so a suggested value never trades one error for another.
+/// </summary>
+public sealed class RuleRunner
+{
+    private readonly RuleCatalog _catalog;
+    private readonly RepoConfig _config;
+    private readonly ISpecAnalyzer _analyzer;
+
+    /// <summary>Creates a runner for one configuration.</summary>
+    public RuleRunner(RuleCatalog catalog, RepoConfig config, ISpecAnalyzer analyzer)
+    {
+        _catalog = catalog ?? throw new ArgumentNullException(nameof(catalog));
+        _config = config ?? throw new ArgumentNullException(nameof(config));
+        _analyzer = analyzer ?? throw new ArgumentNullException(nameof(analyzer));
+    }
+
+    /// <summary>The findings of all enabled rules, with configured severities, before waivers.</summary>
+    public IReadOnlyList<Finding> Run(SpecAnalysis analysis, bool searchFixes = true)
+    {
+        ArgumentNullException.ThrowIfNull(analysis);
+        HashSet<string>? baseline = null;
+        if (searchFixes)
+        {
+            baseline = ErrorIds(Run(analysis, searchFixes: false));
+        }
+
+        var original = analysis.Spec;
+
+        var findings = new List<Finding>();
+        foreach (var rule in _catalog.Rules)
+        {
+            var ruleConfig = ConfigurationBinding.For(_config, rule.Descriptor.Id);
+            if (ruleConfig.Off)
+            {
+                continue;
+            }
+
+            var context = new RuleContext(analysis, _analyzer, rule.Descriptor, ruleConfig, id => ConfigurationBinding.For(_config, id))
+            {
+                SearchFixes = searchFixes,
+                OtherRulesCheck = baseline is null ? null : (candidate, ruleId) => NoNewErrors(original, candidate, ruleId, baseline),
+            };
+            foreach (var f in rule.Check(context))
+            {
+                findings.Add(ruleConfig.Severity is { } s ? f with { Severity = s } : f);
+            }
+        }
+
+        return findings;
+    }
+
+    // A candidate may leave an unrelated error in place (a clipped output is not fixed by Cf), but must not
+    // add a new one, nor leave an error that is about the very key being changed: two rules that both want a
+    // different Cf must agree on one value.
+    private bool NoNewErrors(TiaSpec original, TiaSpec candidate, string ruleId, HashSet<string> baseline)
+    {
+        var changed = Fixes.SpecEdits.ChangedPointer(original, candidate);
+        var analysis = _analyzer.Analyze(candidate, includeNoise: true, includeCorners: true);
+        return Run(analysis, searchFixes: false)
+            .Where(f => f.Severity == Severity.Error && f.RuleId != ruleId)
+            .All(f => baseline.Contains(f.RuleId) && f.Pointer != changed);
+    }
+
+    private static HashSet<string> ErrorIds(IEnumerable<Finding> findings) =>
+        findings.Where(f => f.Severity == Severity.Error).Select(f => f.RuleId).ToHashSet(StringComparer.Ordinal);
+}
