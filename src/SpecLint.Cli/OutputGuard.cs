@@ -3,13 +3,13 @@ namespace SpecLint.Cli;
 /// <summary>Refuses output paths that would overwrite an input: a report must never replace a spec.</summary>
 internal static class OutputGuard
 {
-    public static bool IsSafeTarget(string path, IEnumerable<string> inputs, out string why)
+    public static bool IsSafeTarget(string path, IEnumerable<string> inputs, string suggestedExtension, out string why)
     {
         var full = Path.GetFullPath(path);
         var ext = Path.GetExtension(full).ToLowerInvariant();
         if (ext is ".yaml" or ".yml")
         {
-            why = $"'{path}' looks like a spec or configuration file; write the report to a .md file";
+            why = $"'{path}' looks like a spec or configuration file; write to a {suggestedExtension} file";
             return false;
         }
 
@@ -21,7 +21,7 @@ internal static class OutputGuard
 
         if (Directory.Exists(full))
         {
-            why = $"'{path}' is a folder; give a file name such as {Path.Combine(path, "report.md")}";
+            why = $"'{path}' is a folder; give a file name such as {Path.Combine(path, "report" + suggestedExtension)}";
             return false;
         }
 

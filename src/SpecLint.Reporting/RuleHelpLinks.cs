@@ -1,14 +1,16 @@
+using SpecLint.Rules.Engine;
+
 namespace SpecLint.Reporting;
 
-/// <summary>Where a rule's documentation page is published; every reporter links rules through here.</summary>
+/// <summary>Links to the project and to each rule's page (the base lives in <see cref="RuleDocs"/>, in one place).</summary>
 public static class RuleHelpLinks
 {
-    /// <summary>Base of the rule pages: a page sits at <c>&lt;base&gt;&lt;id&gt;/&lt;id&gt;.md</c>, as in the repository's <c>rules/</c> folder.</summary>
-    public const string DocsBase = "https://github.com/speclint/speclint/blob/main/rules/";
+    /// <summary>The folder of the rule pages, with a trailing slash.</summary>
+    public const string DocsBase = RuleDocs.HelpBase + "/";
 
     /// <summary>The project's home page.</summary>
     public const string Project = "https://github.com/speclint/speclint";
 
-    /// <summary>The page of the rule <paramref name="ruleId"/>.</summary>
+    /// <summary>The page of one rule.</summary>
     public static string For(string ruleId) => DocsBase + Uri.EscapeDataString(ruleId) + "/" + Uri.EscapeDataString(ruleId) + ".md";
 }

@@ -13,7 +13,9 @@ internal static class CheckCommand
         var paths = new Argument<string[]>("paths") { Description = "Spec files or folders (default: the repository, per .speclint.yaml)", Arity = ArgumentArity.ZeroOrMore };
         var format = new Option<string>("--format") { Description = "Terminal output: text, json (DESIGN §5) or github (workflow annotations)", DefaultValueFactory = _ => DefaultFormat() };
         format.AcceptOnlyFromAmong("text", "json", "github");
-        var report = new Option<string?>("--report") { Description = "Write a Markdown review report to this file (plots beside it)" };
+        var report = new Option<string?>("--report") { Description = "Write a Markdown review report to this file (SVG plots in a folder beside it)" };
+        var html = new Option<string?>("--html") { Description = "Write the report as one standalone HTML page with the plots inline" };
+        var sarif = new Option<string?>("--sarif") { Description = "Write SARIF 2.1.0 for code scanning to this file" };
         var failOn = new Option<string?>("--fail-on") { Description = "Lowest severity that fails the run: error, warning or note (overrides fail-on in .speclint.yaml)" };
         failOn.AcceptOnlyFromAmong("error", "warning", "note");
         var config = new Option<string?>("--config") { Description = "Use this configuration file instead of the nearest .speclint.yaml" };
@@ -22,7 +24,7 @@ internal static class CheckCommand
         var quiet = new Option<bool>("--quiet") { Description = "No progress on stderr" };
         var command = new Command("check", "Check spec files: schema, analysis, rules. Exit 0 pass, 1 findings at the fail level, 2 unusable input")
         {
-            paths, format, report, failOn, config, asOf, nominal, quiet,
+            paths, format, report, html, sarif, failOn, config, asOf, nominal, quiet,
         };
         command.SetAction(parse =>
         {
@@ -41,12 +43,15 @@ internal static class CheckCommand
                 return ExitCodes.UnusableInput;
             }
 
-            var reportPath = parse.GetValue(report);
             var inputs = parse.GetValue(paths) ?? [];
-            if (reportPath is not null && !OutputGuard.IsSafeTarget(reportPath, inputs, out var why))
+            var request = new OutputRequest(parse.GetValue(format)!, parse.GetValue(report), parse.GetValue(html), parse.GetValue(sarif));
+            foreach (var (name, target, extension) in new[] { ("--report", request.ReportPath, ".md"), ("--html", request.HtmlPath, ".html"), ("--sarif", request.SarifPath, ".sarif") })
             {
-                error.WriteLine($"speclint: --report: {why}");
-                return ExitCodes.UnusableInput;
+                if (target is not null && !OutputGuard.IsSafeTarget(target, inputs, extension, out var why))
+                {
+                    error.WriteLine($"speclint: {name}: {why}");
+                    return ExitCodes.UnusableInput;
+                }
             }
 
             SeverityNames.TryParse(parse.GetValue(failOn), out var fail);
@@ -60,7 +65,7 @@ internal static class CheckCommand
                 Progress = Progress.For(error, parse.GetValue(quiet)),
             };
             var run = Checker.Run(options);
-            Outputs.Write(run, parse.GetValue(format)!, output, reportPath);
+            Outputs.Write(run, request, output);
             return run.ExitCode;
         });
         return command;

@@ -41,9 +41,11 @@ internal static class DemoCommand
             var run = Checker.Run(new CheckOptions { Paths = [specs] });
             TerminalReport.Write(run, output, color: false);
             var report = Path.Combine(folder, "report.md");
-            Outputs.WriteReport(run, report, "SpecLint demo: the Saltmarsh Tern buoy's optical front end");
+            const string title = "SpecLint demo: the Saltmarsh Tern buoy's front ends";
+            Outputs.WriteMarkdown(run, report, title);
+            Outputs.WriteHtml(run, Path.Combine(folder, "report.html"), title);
             output.WriteLine();
-            output.WriteLine($"Demo report: {report}");
+            output.WriteLine($"Demo report: {report} (plots in {Path.Combine(folder, "report-plots")}; one-page HTML: {Path.Combine(folder, "report.html")})");
             output.WriteLine("These channels are invented examples; some are clean and some carry deliberate design mistakes.");
             output.WriteLine($"'speclint check {specs}' gives the same findings with the exit code CI would see ({run.ExitCode}).");
             return ExitCodes.Clean;

@@ -1,0 +1,43 @@
+using System.Text;
+using SpecLint.Rules.Checking;
+
+namespace SpecLint.Reporting.Plots;
+
+/// <summary>Writes the charts of every analysed spec beside a report and returns the Markdown that links them.</summary>
+public static class PlotFiles
+{
+    /// <summary>
+    /// Writes <c>&lt;folder&gt;/&lt;spec&gt;.&lt;chart&gt;.svg</c> for each spec and returns per-spec Markdown, keyed by
+    /// spec file. Specs that did not load have no charts.
+    /// </summary>
+    public static IReadOnlyDictionary<string, string> Write(CheckRun run, string reportDirectory, string plotFolderName = "plots")
+    {
+        ArgumentNullException.ThrowIfNull(run);
+        var folder = Path.Combine(reportDirectory, plotFolderName);
+        var links = new Dictionary<string, string>(StringComparer.Ordinal);
+        foreach (var spec in run.Specs)
+        {
+            if (spec.Analysis is not { } analysis)
+            {
+                continue;
+            }
+
+            Directory.CreateDirectory(folder);
+            var md = new StringBuilder();
+            foreach (var (suffix, chart) in SpecPlots.Build(analysis, spec.Name))
+            {
+                var file = $"{SafeName(spec.Name)}.{suffix}.svg";
+                SvgChartWriter.WriteFile(chart with { Id = SafeName(spec.Name) + "-" + suffix }, Path.Combine(folder, file));
+                md.Append("![").Append(chart.Title).Append("](").Append(plotFolderName).Append('/').Append(file).Append(")\n\n");
+            }
+
+            links[spec.File] = md.ToString();
+        }
+
+        return links;
+    }
+
+    /// <summary>A file-name-safe form of a spec name.</summary>
+    public static string SafeName(string name) =>
+        new(name.Select(c => char.IsAsciiLetterOrDigit(c) || c is '-' or '_' ? c : '-').ToArray());
+}
