@@ -47,5 +47,11 @@ public sealed class SourceMap
     /// The position a message about this key should point at: the key itself when the value is a block
     /// (so the editor lands on "feedback:"), otherwise the value.
     /// </summary>
-    public SourcePosition LocateKeyOrValue(string pointer) => Locate(pointer);
+    public SourcePosition LocateKeyOrValue(string pointer)
+    {
+        var at = Locate(pointer);
+        return at.KeyLine > 0 && at.KeyLine != at.Line
+            ? at with { Line = at.KeyLine, Column = at.KeyColumn }
+            : at;
+    }
 }

@@ -75,13 +75,17 @@ public static class ConfigurationBinding
 
                 if (!QuantityParser.TryParse(option.RawText, declared.Dimension, out var parsed, out var error) || parsed!.Form != ToleranceForm.None)
                 {
-                    yield return Problem(displayPath, option.Position, $"/rules/{id}/{key}",
+                    // A bad value is reported at the value itself.
+                    yield return Problem(displayPath, option.Position with { KeyLine = 0 }, $"/rules/{id}/{key}",
                         $"rules.{id}.{key}: {error ?? "takes one value, not a tolerance or range"}; write e.g. \"{declared.Default}\"");
                 }
             }
         }
     }
 
+    // Point at the key ("phase-margn:"), which is what is wrong, rather than at its value.
     private static Finding Problem(string file, SourcePosition at, string pointer, string message) =>
-        new(RuleIds.ConfigInvalid, Severity.Error, file, pointer, at.Line, at.Column, message);
+        at.KeyLine > 0
+            ? new(RuleIds.ConfigInvalid, Severity.Error, file, pointer, at.KeyLine, at.KeyColumn, message)
+            : new(RuleIds.ConfigInvalid, Severity.Error, file, pointer, at.Line, at.Column, message);
 }

@@ -80,7 +80,7 @@ public sealed partial class RuleContext
     /// <summary>Creates a finding at the key <paramref name="pointer"/> (or its nearest written ancestor).</summary>
     public Finding Report(string pointer, string message, FixSuggestion? fix = null, Severity? severity = null)
     {
-        var at = Spec.Locations.Locate(pointer);
+        var at = Spec.Locations.LocateKeyOrValue(pointer);
         return new Finding(_descriptor.Id, severity ?? _descriptor.DefaultSeverity, Spec.File, pointer, at.Line, at.Column, message, fix);
     }
 

@@ -1,0 +1,58 @@
+using System.Text;
+
+namespace SpecLint.Cli.Tests;
+
+/// <summary>Runs the tool in-process in a scratch folder and captures its output.</summary>
+internal sealed class CliHarness : IDisposable
+{
+    private static readonly object CurrentDirectoryLock = new();
+
+    public CliHarness()
+    {
+        Root = Directory.CreateTempSubdirectory("speclint-cli-").FullName;
+    }
+
+    public string Root { get; }
+
+    public string Write(string relativePath, string text)
+    {
+        var path = Path.Combine(Root, relativePath);
+        Directory.CreateDirectory(Path.GetDirectoryName(path)!);
+        File.WriteAllText(path, text, new UTF8Encoding(false));
+        return path;
+    }
+
+    public string Path_(string relative) => Path.Combine(Root, relative);
+
+    /// <summary>Runs with the scratch folder as the working directory (tests in this assembly run one at a time for that).</summary>
+    public (int Exit, string Out, string Err) Run(params string[] args)
+    {
+        lock (CurrentDirectoryLock)
+        {
+            var previous = Directory.GetCurrentDirectory();
+            Directory.SetCurrentDirectory(Root);
+            try
+            {
+                using var output = new StringWriter();
+                using var error = new StringWriter();
+                var exit = SpecLintApp.Run(args, output, error);
+                return (exit, output.ToString(), error.ToString());
+            }
+            finally
+            {
+                Directory.SetCurrentDirectory(previous);
+            }
+        }
+    }
+
+    public void Dispose()
+    {
+        try
+        {
+            Directory.Delete(Root, recursive: true);
+        }
+        catch (IOException)
+        {
+        }
+    }
+}
