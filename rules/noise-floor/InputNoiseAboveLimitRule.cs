@@ -40,13 +40,15 @@ public sealed class InputNoiseAboveLimitRule : IRule
             .Select(s => string.Create(CultureInfo.InvariantCulture, $"{s.Name} {100 * s.V.Volts * s.V.Volts / total:0}%"));
         yield return context.Report("/requirements/noise/max-input", string.Create(CultureInfo.InvariantCulture,
             $"input-referred noise is {Fmt.Q(n.InputRms)} rms over {Fmt.Hz(n.BandLow)} .. {Fmt.Hz(n.BandHigh)} at {n.Temperature.Celsius:0.#} °C, above the {Fmt.Q(limit)} limit. Largest shares of the output noise power: {string.Join(", ", ranked)}. ")
-            + Advice(sources[0].V.Volts, sources[4].V.Volts, total));
+            + Advice(sources.OrderByDescending(s => s.V.Volts).First().Name));
     }
 
-    private static string Advice(double rf, double en, double total) =>
-        rf * rf >= en * en
-            ? "Rf's noise dominates: a larger Rf lowers the input-referred noise (its current noise falls as 1/√Rf), within the headroom."
-            : en * en / total > 0.5
-                ? "the op-amp's voltage noise, multiplied by 1 + Cin/Cf at high frequency, dominates: reduce the input capacitance, narrow the band, or use a lower-noise op-amp."
-                : "narrow the band to what the measurement needs, or lower the dominant source.";
+    private static string Advice(string dominant) => dominant switch
+    {
+        "Rf thermal" => "Rf's noise dominates: a larger Rf lowers the input-referred noise (its current noise falls as 1/√Rf), within the headroom.",
+        "shot" => "the shot noise of the signal and dark current dominates: the channel is at the physical limit for this band; narrow the band or lower the dark current.",
+        "op-amp voltage noise × noise gain" => "the op-amp's voltage noise, multiplied by 1 + Cin/Cf at high frequency, dominates: reduce the input capacitance, narrow the band, or use a lower-noise op-amp.",
+        "op-amp current noise" => "the op-amp's current noise dominates: use an op-amp with a lower input current noise (a FET input).",
+        _ => "the sensor's shunt resistance dominates: a sensor with a higher shunt resistance, or cooling it, lowers the noise.",
+    };
 }
