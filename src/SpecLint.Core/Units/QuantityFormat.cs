@@ -36,6 +36,12 @@ public static class QuantityFormat
         // exponent is the power of ten of the leading digit; pick the prefix that leaves 1..999 before the point.
         var engineering = (int)Math.Floor(exponent / 3.0) * 3;
         engineering = Math.Clamp(engineering, -15, 12);
+        if (dimension == Dimension.Capacitance && exponent == -13)
+        {
+            // The trade writes sub-picofarad capacitors as 0.56 pF, not 560 fF.
+            engineering = -12;
+        }
+
         var mantissa = PlaceDecimalPoint(digits, exponent - engineering);
         return (negative ? "-" : "") + mantissa + " " + UnitTable.FormatPrefixes[engineering] + unit.Symbol;
     }
