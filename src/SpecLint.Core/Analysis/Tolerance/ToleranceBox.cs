@@ -194,9 +194,9 @@ internal sealed class ToleranceBox
         string deviation;
         if (absolute)
         {
-            deviation = minus == plus
-                ? "±" + QuantityFormat.FormatRounded(plus, T.Dimension, 3)
-                : $"+{QuantityFormat.FormatRounded(plus, T.Dimension, 3)}/−{QuantityFormat.FormatRounded(minus, T.Dimension, 3)}";
+            // Compared as printed: 0.68 pF ± 0.25 pF gives limits whose differences disagree in the last bit.
+            var (p, m) = (QuantityFormat.FormatRounded(plus, T.Dimension, 3), QuantityFormat.FormatRounded(minus, T.Dimension, 3));
+            deviation = p == m ? "±" + p : $"+{p}/−{m}";
         }
         else if (s.Typ.Si != 0)
         {
