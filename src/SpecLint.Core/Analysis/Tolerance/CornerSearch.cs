@@ -38,7 +38,8 @@ internal sealed class CornerSearch
     public IReadOnlyDictionary<Extreme, (double[] Point, LoopMetrics Metrics)> Run(ToleranceOptions options)
     {
         var loop = Enumerable.Range(0, _box.Axes.Length).Where(i => _box.Axes[i].AffectsLoop).ToArray();
-        var enumerated = loop.Length <= options.MaxVertexParameters ? loop : MostInfluential(loop, Math.Max(0, options.MaxVertexParameters));
+        var cap = Math.Clamp(options.MaxVertexParameters, 0, 20);
+        var enumerated = loop.Length <= cap ? loop : MostInfluential(loop, cap);
 
         EnumeratedAxes = enumerated.Length;
         var extremes = Enum.GetValues<Extreme>();
@@ -58,8 +59,9 @@ internal sealed class CornerSearch
 
         var typical = _box.TypicalPoint();
         Consider(typical, Evaluate(typical));
-        var count = 1L << enumerated.Length;
-        for (long mask = 0; mask < count; mask++)
+        var count = 1 << enumerated.Length;
+        var vertices = new double[count][];
+        for (var mask = 0; mask < count; mask++)
         {
             var x = (double[])typical.Clone();
             for (var j = 0; j < enumerated.Length; j++)
@@ -68,7 +70,16 @@ internal sealed class CornerSearch
                 x[enumerated[j]] = ((mask >> j) & 1) == 0 ? a.Low : a.High;
             }
 
-            Consider(x, Evaluate(x));
+            vertices[mask] = x;
+        }
+
+        // Vertices are independent: analysed in parallel into their own slots, then taken in mask order.
+        var metrics = new LoopMetrics[count];
+        ParallelFor(count, options.MaxDegreeOfParallelism, k => metrics[k] = LoopMetrics.Of(_box.Build(vertices[k])));
+        for (var mask = 0; mask < count; mask++)
+        {
+            _cache.TryAdd(vertices[mask], metrics[mask]);
+            Consider(vertices[mask], metrics[mask]);
         }
 
         var result = new Dictionary<Extreme, (double[] Point, LoopMetrics Metrics)>();
@@ -84,6 +95,20 @@ internal sealed class CornerSearch
         }
 
         return result;
+    }
+
+    /// <summary>Runs <paramref name="body"/> for 0 .. count − 1, keeping an analysis exception's own type for callers.</summary>
+    internal static void ParallelFor(int count, int maxDegreeOfParallelism, Action<int> body)
+    {
+        try
+        {
+            Parallel.For(0, count, new ParallelOptions { MaxDegreeOfParallelism = maxDegreeOfParallelism }, body);
+        }
+        catch (AggregateException e) when (e.InnerExceptions.Count > 0)
+        {
+            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(e.InnerExceptions[0]).Throw();
+            throw;
+        }
     }
 
     /// <summary>Larger is more extreme; an undefined figure is −∞, except that an undefined margin is the worst minimum (+∞).</summary>

@@ -32,7 +32,8 @@ public sealed record ToleranceOptions
     /// <summary>
     /// The most parameters whose 2ⁿ vertices are all evaluated (default 12, i.e. 4096 vertices). With more,
     /// the <see cref="MaxVertexParameters"/> with the largest one-at-a-time effect are enumerated, the others
-    /// held typical, and the search inside the box then moves every parameter, the others included.
+    /// held typical, and the search inside the box then moves every parameter, the others included. Values
+    /// above 20 count as 20.
     /// </summary>
     public int MaxVertexParameters { get; init; } = 12;
 
