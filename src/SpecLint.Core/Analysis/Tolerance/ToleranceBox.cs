@@ -39,8 +39,8 @@ internal sealed class ToleranceBox
                 var (lo, hi) = d.TemperatureFactors(t.Min, t.Max);
                 if (lo != hi)
                 {
-                    var range = t.IsExact ? t.Typ.ToString() : $"{t.Min} .. {t.Max}";
-                    var rated = d.IsRatedFor(t.Min, t.Max) ? "" : $"; outside its rated {d.RatedLow} .. {d.RatedHigh}, so the change may be larger";
+                    var range = t.IsExact ? Celsius(t.Typ) : $"{Celsius(t.Min)} .. {Celsius(t.Max)}";
+                    var rated = d.IsRatedFor(t.Min, t.Max) ? "" : $"; outside its rated {Celsius(d.RatedLow)} .. {Celsius(d.RatedHigh)}, so the change may be larger";
                     var how = d.Class == 2 ? " (class 2: the full change, as a bound)" : "";
                     axes.Add(new ToleranceAxis(AxisKind.Dielectric, "/feedback/dielectric", "Cf dielectric", lo, 1, hi, null,
                         $"{d.Describe()} over {range}{how}{rated}"));
@@ -173,6 +173,9 @@ internal sealed class ToleranceBox
             ? _ibAt25
             : _ibAt25 * Math.Pow(2, (kelvin - Temperature.ZeroCelsiusInKelvin - ReferenceCelsius) / _doublingKelvin);
 
+    // The shortest round-trip text can print 40 °C as "4E+01 °C"; tables want plain figures.
+    private static string Celsius(Temperature t) => QuantityFormat.FormatRounded(t.Kelvin, Dimension.Temperature, 4);
+
     private static void Add<T>(List<ToleranceAxis> axes, AxisKind kind, string pointer, string label, Spread<T> spread)
         where T : struct, IQuantity<T>
     {
@@ -208,13 +211,13 @@ internal sealed class ToleranceBox
         }
         else
         {
-            deviation = $"{s.Min} .. {s.Max}";
+            deviation = $"{QuantityFormat.FormatRounded(s.Min.Si, T.Dimension, 4)} .. {QuantityFormat.FormatRounded(s.Max.Si, T.Dimension, 4)}";
         }
 
         return s.Form switch
         {
             ToleranceForm.LetterCode => $"letter code {s.ToleranceText?.Trim()} (IEC 60062): {deviation}",
-            ToleranceForm.Range => $"range {s.Min} .. {s.Max}",
+            ToleranceForm.Range => $"range {QuantityFormat.FormatRounded(s.Min.Si, T.Dimension, 4)} .. {QuantityFormat.FormatRounded(s.Max.Si, T.Dimension, 4)}",
             _ => deviation,
         };
     }
