@@ -1,5 +1,5 @@
 using System.Globalization;
-using System.Text.RegularExpressions;
+using SpecLint.Core.Analysis.Tolerance;
 using SpecLint.Core.Units;
 using SpecLint.Rules.Engine;
 using SpecLint.Rules.Fixes;
@@ -10,7 +10,7 @@ namespace SpecLint.Rules.BuiltIn;
 /// Flags a design whose phase-margin floor or bandwidth requirement fails at the worst corner of its part
 /// tolerances and temperature, and any class 2 dielectric in the feedback path.
 /// </summary>
-public sealed partial class ToleranceCornerFailsRule : IRule
+public sealed class ToleranceCornerFailsRule : IRule
 {
     /// <summary>The descriptor.</summary>
     public static RuleDescriptor Info { get; } = new(
@@ -19,16 +19,12 @@ public sealed partial class ToleranceCornerFailsRule : IRule
     /// <inheritdoc />
     public RuleDescriptor Descriptor => Info;
 
-    // EIA class 2 codes: low temperature letter, high temperature digit, change letter (X7R, X5R, Y5V, Z5U, X8R, ...).
-    [GeneratedRegex("^[XYZ][4-9][P-V]$", RegexOptions.CultureInvariant)]
-    private static partial Regex ClassTwoCode();
-
     /// <inheritdoc />
     public IEnumerable<Finding> Check(RuleContext context)
     {
         ArgumentNullException.ThrowIfNull(context);
         var spec = context.Spec;
-        if (spec.Feedback.Dielectric is { } d && ClassTwoCode().IsMatch(d.ToUpperInvariant()))
+        if (spec.Feedback.Dielectric is { } d && Dielectric.TryParse(d, out var dielectric) && dielectric.Class == 2)
         {
             yield return context.Report("/feedback/dielectric",
                 $"the feedback capacitor is {d}, a class 2 dielectric: its capacitance moves with temperature (±15 % for X7R, +22/−82 % for Y5V), DC bias and age, so the compensation moves with it. Use C0G/NP0 (±30 ppm/K).",

@@ -1,10 +1,26 @@
+using System.Globalization;
 using BenchmarkDotNet.Running;
 
 namespace SpecLint.Benchmarks;
 
-/// <summary>Entry point: <c>dotnet run -c Release --project tests/SpecLint.Benchmarks -- --filter '*'</c>.</summary>
+/// <summary>
+/// Entry point: <c>dotnet run -c Release --project tests/SpecLint.Benchmarks -- --filter '*'</c> for the
+/// BenchmarkDotNet suites, or <c>-- montecarlo [specs] [samples]</c> for the timed tolerance run.
+/// </summary>
 public static class Program
 {
     /// <summary>Runs the benchmarks chosen on the command line.</summary>
-    public static void Main(string[] args) => BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args);
+    public static void Main(string[] args)
+    {
+        ArgumentNullException.ThrowIfNull(args);
+        if (args.Length > 0 && args[0] == "montecarlo")
+        {
+            MonteCarloBench.Run(
+                args.Length > 1 ? int.Parse(args[1], CultureInfo.InvariantCulture) : 1000,
+                args.Length > 2 ? int.Parse(args[2], CultureInfo.InvariantCulture) : 1000);
+            return;
+        }
+
+        BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args);
+    }
 }

@@ -74,7 +74,7 @@ public sealed class NgspiceCrossCheckTests(ITestOutputHelper output)
         Assert.Equal(dcMax, r.Output.MaxExact.Volts, 1e-3);
     }
 
-    private static double? FirstFall(double[] f, double[] g)
+    internal static double? FirstFall(double[] f, double[] g)
     {
         for (var i = 1; i < f.Length; i++)
         {
@@ -87,7 +87,7 @@ public sealed class NgspiceCrossCheckTests(ITestOutputHelper output)
         return null;
     }
 
-    private static List<(int Index, double Hz, bool Falling)> Crossings(double[] f, double[] logT)
+    internal static List<(int Index, double Hz, bool Falling)> Crossings(double[] f, double[] logT)
     {
         var list = new List<(int, double, bool)>();
         for (var i = 1; i < f.Length; i++)
@@ -108,11 +108,11 @@ public sealed class NgspiceCrossCheckTests(ITestOutputHelper output)
         return Math.Exp(u);
     }
 
-    private static double Interpolate(double f0, double f1, double y0, double y1, double f) =>
+    internal static double Interpolate(double f0, double f1, double y0, double y1, double f) =>
         y0 + ((y1 - y0) * (Math.Log(f / f0) / Math.Log(f1 / f0)));
 
     /// <summary>Phase unwrapped from the first (near-DC) point: steps of more than π are taken as wraps.</summary>
-    private static double[] Unwrap(Complex[] values)
+    internal static double[] Unwrap(Complex[] values)
     {
         var result = new double[values.Length];
         result[0] = values[0].Phase;

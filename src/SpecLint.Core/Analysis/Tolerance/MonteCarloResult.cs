@@ -19,4 +19,11 @@ public sealed record MonteCarloResult(
     ImmutableSortedDictionary<string, double> YieldByCheck,
     ImmutableSortedDictionary<int, double> PhaseMarginPercentilesDeg,
     ImmutableSortedDictionary<int, double> BandwidthPercentilesHz,
-    ImmutableArray<HistogramBin> PhaseMarginHistogram);
+    ImmutableArray<HistogramBin> PhaseMarginHistogram)
+{
+    /// <summary>The seed as configured (a 64-bit whole number); <see cref="Seed"/> holds its low 32 bits.</summary>
+    public long ConfiguredSeed { get; init; }
+
+    /// <summary>Samples whose loop gain never fell through 1 (undefined margin, counted as failing the floor).</summary>
+    public int PhaseMarginUndefinedCount { get; init; }
+}

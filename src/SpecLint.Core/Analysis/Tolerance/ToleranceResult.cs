@@ -31,4 +31,14 @@ public sealed record ToleranceResult(
     double PeakingDbMax,
     Corner PeakingMaxAt,
     bool UnstableCornerExists,
-    MonteCarloResult? MonteCarlo);
+    MonteCarloResult? MonteCarlo)
+{
+    /// <summary>The corner giving <see cref="PhaseMarginMax"/>.</summary>
+    public Corner? PhaseMarginMaxAt { get; init; }
+
+    /// <summary>Distinct points of the box analysed for the extremes (vertices plus the inner search).</summary>
+    public int CornerEvaluations { get; init; }
+
+    /// <summary>Parameters whose vertices were all enumerated (fewer than the loop parameters only past <see cref="ToleranceOptions.MaxVertexParameters"/>).</summary>
+    public int VertexParameters { get; init; }
+}
