@@ -44,8 +44,10 @@ public sealed class BandwidthBelowRequirementRule : IRule
             fix is { } v ? new FixSuggestion("/feedback/capacitance", SpecEdits.CfText(context.Spec, v)) : null);
     }
 
-    private static Capacitance? LargestCfMeeting(RuleContext context, Frequency required, Angle floor)
+    /// <summary>The largest standard Cf at or below the current one that meets the bandwidth and the floor at every corner.</summary>
+    public static Capacitance? LargestCfMeeting(RuleContext context, Frequency required, Angle floor)
     {
+        ArgumentNullException.ThrowIfNull(context);
         if (context.Spec.Feedback.Capacitance is not { } cf)
         {
             return null;

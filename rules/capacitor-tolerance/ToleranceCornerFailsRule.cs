@@ -36,10 +36,15 @@ public sealed class ToleranceCornerFailsRule : IRule
             yield break;
         }
 
+        // Only the spread is judged here: a design that already fails at nominal is reported by
+        // phase-margin and bandwidth, and one root cause should not raise two errors.
         var floor = PhaseMarginBelowFloorRule.FloorFor(context);
         var required = spec.Requirements.Bandwidth;
-        var pmFails = t.PhaseMarginMin is null || t.PhaseMarginMin.Value.Degrees < floor.Degrees;
-        var bwFails = required is { } req && t.BandwidthMin is { } bmin && bmin.Hertz < req.Hertz;
+        var nominal = context.Analysis;
+        var nominalPmOk = nominal.PhaseMargin is { } npm && npm.Degrees >= floor.Degrees;
+        var nominalBwOk = required is not { } r0 || (nominal.Bandwidth is { } nbw && nbw.Hertz >= r0.Hertz);
+        var pmFails = nominalPmOk && (t.PhaseMarginMin is null || t.PhaseMarginMin.Value.Degrees < floor.Degrees);
+        var bwFails = nominalBwOk && required is { } req && t.BandwidthMin is { } bmin && bmin.Hertz < req.Hertz;
         if (!pmFails && !bwFails)
         {
             yield break;
@@ -57,11 +62,19 @@ public sealed class ToleranceCornerFailsRule : IRule
             parts.Add($"bandwidth falls to {Fmt.Hz(t.BandwidthMin)} (required {Fmt.Hz(required)}) at {t.BandwidthMinAt.Describe()}");
         }
 
-        var fix = CfForFloor.Find(context, floor, r => required is not { } q || (r.WorstBandwidthHz is { } w && w >= q.Hertz));
+        // A margin problem wants a larger Cf (the smallest that holds); a bandwidth problem a smaller one (the largest that holds).
+        var fix = pmFails
+            ? CfForFloor.Find(context, floor, r => required is not { } q || (r.WorstBandwidthHz is { } w && w >= q.Hertz))
+            : BandwidthBelowRequirementRule.LargestCfMeeting(context, required!.Value, floor) is { } c
+                ? new FixSuggestion("/feedback/capacitance", SpecEdits.CfText(spec, c))
+                : null;
+        var yield = t.MonteCarlo is { } mc
+            ? string.Create(CultureInfo.InvariantCulture, $" In {mc.Samples} Monte Carlo builds {100 * mc.Yield:0.#}% meet every requirement.")
+            : "";
         var advice = fix is { } f
-            ? $" Cf = {f.Value} holds both at every corner (re-checked); tighter tolerances on the dominant parts also help."
-            : " No standard Cf meets both at every corner: tighten the tolerances named above, use a C0G capacitor, or choose an op-amp with a tighter GBW spread.";
+            ? $" Cf = {f.Value} holds at every corner (re-checked); tighter tolerances on the parts named also help."
+            : " No standard Cf holds at every corner: tighten the tolerances named above, use a C0G capacitor, or choose an op-amp with a tighter GBW spread.";
         yield return context.Report(spec.Feedback.Capacitance is null ? "/feedback" : "/feedback/capacitance",
-            "with the part tolerances and temperature range, " + string.Join("; ", parts) + "." + advice, fix);
+            "the design passes at nominal, but with the part tolerances and temperature range " + string.Join("; ", parts) + "." + yield + advice, fix);
     }
 }
