@@ -133,7 +133,7 @@ public sealed class OutputOutsideRailsRuleTests
         // Independent: the largest value of the tolerance's series (REFERENCE §3.4) with 0.5 V + 10 µA·R + 1 mV ≤ 4.6 V.
         var series = rf.EndsWith("±5%", StringComparison.Ordinal) ? Reference.E24 : Reference.E96;
         var expected = Reference.AtOrBelow(series, (HighLimit - Bias - Vos) / Imax);
-        Assert.Equal(expected, QuantityParser.Parse(f.Fix!.Value, Dimension.Resistance).Typ, 6);
+        Reference.AssertClose(expected, QuantityParser.Parse(f.Fix!.Value, Dimension.Resistance).Typ);
         Assert.EndsWith(rf[rf.IndexOf('±', StringComparison.Ordinal)..], f.Fix.Value, StringComparison.Ordinal);
     }
 

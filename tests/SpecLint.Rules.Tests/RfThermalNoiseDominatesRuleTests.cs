@@ -90,7 +90,7 @@ public sealed class RfThermalNoiseDominatesRuleTests
 
         // Independent: Rf ≥ (2kT/q)/Imin at 25 °C = 51.4 MΩ, snapped up to E96 (REFERENCE §3.4); 5 nA·R fits in 5 V.
         var expected = Reference.AtOrAbove(Reference.E96, Reference.TwoKtOverQ(298.15) / 1e-9);
-        Assert.Equal(expected, QuantityParser.Parse(f.Fix!.Value, Dimension.Resistance).Typ, 3);
+        Reference.AssertClose(expected, QuantityParser.Parse(f.Fix!.Value, Dimension.Resistance).Typ);
     }
 
     [Fact]

@@ -62,4 +62,8 @@ internal static class Reference
         var wc = Math.Sqrt(lo * hi);
         return 90 + ((Math.Atan(wc * rf * cf) - Math.Atan(wc * rf * (cin + cf))) * 180 / Math.PI);
     }
+
+    /// <summary>Asserts two positive values agree to a relative <paramref name="relative"/>.</summary>
+    public static void AssertClose(double expected, double actual, double relative = 1e-9) =>
+        Assert.True(Math.Abs(actual - expected) <= relative * Math.Abs(expected), $"expected {expected:G12}, got {actual:G12}");
 }
