@@ -39,7 +39,7 @@ public sealed class RfThermalNoiseDominatesRule : IRule
         var found = StandardValueSearch.Find(context, series, needed, upward: true,
             c => SpecEdits.WithRf(spec, new Resistance(c)), edited => OutputOutsideRailsRule.Fits(context.Reanalyze(edited).Analysis.Output, span), steps: 1);
         var message = string.Create(CultureInfo.InvariantCulture,
-            $"Imin·Rf = {Fmt.Q(new Voltage(spec.Input.CurrentMin.Amperes * spec.Feedback.Resistance.Typ.Ohms))} is {ratio:0.###}× 2kT/q ({Fmt.Q(twoKtq)} at {hottest.Celsius:0.#} °C): Rf's thermal noise is {1 / ratio:0.#}× the shot noise of the {Fmt.Q(spec.Input.CurrentMin)} minimum signal in power, so the resistor, not the signal, sets the noise floor.");
+            $"Imin·Rf = {Fmt.Q(new Voltage(spec.Input.CurrentMin.Amperes * spec.Feedback.Resistance.Typ.Ohms))} is {ratio:G3}× 2kT/q ({Fmt.Q(twoKtq)} at {hottest.Celsius:0.#} °C): Rf's thermal noise is {1 / ratio:0.#}× the shot noise of the {Fmt.Q(spec.Input.CurrentMin)} minimum signal in power, so the resistor, not the signal, sets the noise floor.");
         if (found is { } rf)
         {
             var r = new Resistance(rf);

@@ -102,5 +102,8 @@ public sealed class RfThermalNoiseDominatesRuleTests
         var f = r.SingleAtMark(Id, Severity.Warning);
         Assert.Null(f.Fix);
         Assert.Contains("no such standard value keeps the full-scale output inside the rails", f.Message, StringComparison.Ordinal);
+        // The ratio Imin·Rf/(2kT/q) = 100 µV/51.4 mV is stated, not rounded away to "0×".
+        var ratio = 1e-9 * 100e3 / Reference.TwoKtOverQ(298.15);
+        Assert.Contains(string.Create(CultureInfo.InvariantCulture, $"is {ratio:G3}× 2kT/q"), f.Message, StringComparison.Ordinal);
     }
 }
