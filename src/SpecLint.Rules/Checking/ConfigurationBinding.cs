@@ -57,7 +57,7 @@ public static class ConfigurationBinding
             {
                 var known = catalog.Rules.Select(r => r.Descriptor.Id).ToList();
                 var hint = Suggest.Closest(id, known) is { } s ? $" (did you mean '{s}'?)" : "";
-                yield return Problem(displayPath, settings.Position, "/rules/" + id, $"rules: '{id}' is not a rule{hint}; 'speclint rules' lists the ids");
+                yield return Problem(displayPath, KeyOf(settings.Position), "/rules/" + id, $"rules: '{id}' is not a rule{hint}; 'speclint rules' lists the ids");
                 continue;
             }
 
@@ -69,23 +69,23 @@ public static class ConfigurationBinding
                     var keys = rule.Descriptor.Options.Select(o => o.Key).ToList();
                     var hint = Suggest.Closest(key, keys) is { } s ? $" (did you mean '{s}'?)" : "";
                     var allowed = keys.Count == 0 ? "it has no options besides severity" : "its options are " + string.Join(", ", keys);
-                    yield return Problem(displayPath, option.Position, $"/rules/{id}/{key}", $"rules.{id}: unknown option '{key}'{hint}; {allowed}");
+                    yield return Problem(displayPath, KeyOf(option.Position), $"/rules/{id}/{key}", $"rules.{id}: unknown option '{key}'{hint}; {allowed}");
                     continue;
                 }
 
                 if (!QuantityParser.TryParse(option.RawText, declared.Dimension, out var parsed, out var error) || parsed!.Form != ToleranceForm.None)
                 {
-                    // A bad value is reported at the value itself.
-                    yield return Problem(displayPath, option.Position with { KeyLine = 0 }, $"/rules/{id}/{key}",
+                    yield return Problem(displayPath, option.Position, $"/rules/{id}/{key}",
                         $"rules.{id}.{key}: {error ?? "takes one value, not a tolerance or range"}; write e.g. \"{declared.Default}\"");
                 }
             }
         }
     }
 
-    // Point at the key ("phase-margn:"), which is what is wrong, rather than at its value.
+    // An unknown id or option key is a problem with the key, so the editor should land on the key, not its value.
+    private static SourcePosition KeyOf(SourcePosition value) =>
+        value.KeyLine > 0 ? value with { Line = value.KeyLine, Column = value.KeyColumn } : value;
+
     private static Finding Problem(string file, SourcePosition at, string pointer, string message) =>
-        at.KeyLine > 0
-            ? new(RuleIds.ConfigInvalid, Severity.Error, file, pointer, at.KeyLine, at.KeyColumn, message)
-            : new(RuleIds.ConfigInvalid, Severity.Error, file, pointer, at.Line, at.Column, message);
+        new(RuleIds.ConfigInvalid, Severity.Error, file, pointer, at.Line, at.Column, message);
 }
