@@ -44,11 +44,12 @@ public sealed class FeedbackCapacitorTooSmallRuleTests
     [Fact]
     public void Flags_a_parasitic_only_design_at_the_feedback_block()
     {
-        // No capacitance key: the finding falls back to the feedback map, which starts at its first key.
-        var f = Lint.Check(Channel("  [|resistance|]: 100 MΩ\n  parasitic-capacitance: 0.2 pF")).SingleAtMark(Id, Severity.Warning);
+        // No capacitance key: the finding falls back to the feedback block and points at its key.
+        var spec = Channel("  resistance: 100 MΩ\n  parasitic-capacitance: 0.2 pF").Replace("\nfeedback:", "\n[|feedback|]:", StringComparison.Ordinal);
+        var f = Lint.Check(spec).SingleAtMark(Id, Severity.Warning);
 
         Assert.Equal("/feedback", f.Pointer);
-        Assert.Contains("only the 200 fF parasitic", f.Message, StringComparison.Ordinal);
+        Assert.Contains("only the 0.2 pF parasitic", f.Message, StringComparison.Ordinal);
     }
 
     [Theory]

@@ -64,7 +64,7 @@ internal static class CheckCommand
                 Tolerances = !parse.GetValue(nominal),
                 Progress = Progress.For(error, parse.GetValue(quiet)),
             };
-            var run = Checker.Run(options);
+            var run = CheckRunner.Run(options);
             Outputs.Write(run, request, output);
             return run.ExitCode;
         });

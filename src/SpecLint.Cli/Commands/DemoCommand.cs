@@ -38,7 +38,7 @@ internal static class DemoCommand
                 File.WriteAllText(Path.Combine(specs, name), text, new UTF8Encoding(false));
             }
 
-            var run = Checker.Run(new CheckOptions { Paths = [specs] });
+            var run = CheckRunner.Run(new CheckOptions { Paths = [specs] });
             TerminalReport.Write(run, output, color: false);
             var report = Path.Combine(folder, "report.md");
             const string title = "SpecLint demo: the Saltmarsh Tern buoy's front ends";

@@ -13,7 +13,10 @@ namespace SpecLint.Rules.Checking;
 /// </summary>
 public static class CheckRunner
 {
-    /// <summary>Runs a check. Never throws for bad input; an exception here is a SpecLint bug.</summary>
+    /// <summary>
+    /// Runs a check. Never throws for bad input; an exception here is a SpecLint bug. <paramref name="tolerances"/>
+    /// replaces the standard corner and Monte Carlo analysis (tests use it); <see cref="CheckOptions.Tolerances"/> turns it off.
+    /// </summary>
     public static CheckRun Run(CheckOptions options, Func<TiaSpec, RepoConfig, bool, ToleranceResult?>? tolerances = null)
     {
         ArgumentNullException.ThrowIfNull(options);
@@ -70,7 +73,8 @@ public static class CheckRunner
         ArgumentNullException.ThrowIfNull(spec);
         ArgumentNullException.ThrowIfNull(config);
         ArgumentNullException.ThrowIfNull(options);
-        var analyzer = new DefaultSpecAnalyzer((s, mc) => options.Tolerances && tolerances is not null ? tolerances(s, config, mc) : null);
+        tolerances ??= StandardTolerances.Analyze;
+        var analyzer = new DefaultSpecAnalyzer((s, mc) => options.Tolerances ? tolerances(s, config, mc) : null);
         SpecAnalysis analysis;
         try
         {

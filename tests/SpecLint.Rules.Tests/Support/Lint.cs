@@ -15,14 +15,19 @@ internal static class Lint
 
     public const string ConfigFile = ".speclint.yaml";
 
-    public static LintResult Check(string markedSpec, string? config = null)
+    public static LintResult Check(string markedSpec, string? config = null) => Check(markedSpec, config, corners: false);
+
+    /// <summary>Checks with the standard tolerance corners and Monte Carlo, as the tool does.</summary>
+    public static LintResult CheckWithCorners(string markedSpec, string? config = null) => Check(markedSpec, config, corners: true);
+
+    private static LintResult Check(string markedSpec, string? config, bool corners)
     {
         var marked = MarkedText.Parse(markedSpec);
         var repoConfig = config is null ? RepoConfig.Default : LoadConfig(config);
         var spec = Load(marked.Text);
-        // Tolerance corners are computed elsewhere (CheckRunner's delegate); these tests run at nominal.
-        var outcome = CheckRunner.CheckSpec(spec, repoConfig, new CheckOptions { Today = Today, Tolerances = false });
-        return new LintResult(marked, outcome, repoConfig);
+        // Most rule tests run at nominal so that hand computations apply; corner tests opt in.
+        var outcome = CheckRunner.CheckSpec(spec, repoConfig, new CheckOptions { Today = Today, Tolerances = corners });
+        return new LintResult(marked, outcome, repoConfig, corners);
     }
 
     public static Core.Spec.Model.TiaSpec Load(string yaml)

@@ -6,7 +6,7 @@ using SpecLint.Rules.Engine;
 namespace SpecLint.Rules.Tests.Support;
 
 /// <summary>The findings of one inline check, with the markers of the spec text.</summary>
-internal sealed record LintResult(MarkedText Spec, SpecOutcome Outcome, RepoConfig Config)
+internal sealed record LintResult(MarkedText Spec, SpecOutcome Outcome, RepoConfig Config, bool Corners = false)
 {
     public ImmutableArray<Finding> Findings => Outcome.Findings;
 
@@ -46,7 +46,7 @@ internal sealed record LintResult(MarkedText Spec, SpecOutcome Outcome, RepoConf
         var fix = Assert.IsType<FixSuggestion>(finding.Fix);
         var fixedYaml = Lint.ApplyFix(Yaml, fix);
         Assert.NotEqual(Yaml, fixedYaml);
-        var again = new LintResult(MarkedText.Parse(fixedYaml), CheckRunner.CheckSpec(Lint.Load(fixedYaml), Config, new CheckOptions { Today = Lint.Today, Tolerances = false }), Config);
+        var again = new LintResult(MarkedText.Parse(fixedYaml), CheckRunner.CheckSpec(Lint.Load(fixedYaml), Config, new CheckOptions { Today = Lint.Today, Tolerances = Corners }), Config, Corners);
         again.Clean(finding.RuleId);
         var before = Findings.Where(f => f.Severity == Severity.Error).Select(f => f.RuleId).ToHashSet(StringComparer.Ordinal);
         var newErrors = again.Findings.Where(f => f.Severity == Severity.Error && !before.Contains(f.RuleId)).ToList();

@@ -4,7 +4,7 @@ namespace SpecLint.Rules.Tests.Support;
 /// Text with <c>[|…|]</c> markers around the spans a finding must point at. The markers are stripped; each
 /// marker's position is the 1-based (line, column) of the first character inside it, which is where
 /// <c>RuleContext.Report</c> puts a finding: the first character of a scalar value, or, for a block map such
-/// as <c>feedback:</c>, the first character of its first key (the map's own start).
+/// as <c>feedback:</c>, the first character of its key.
 /// </summary>
 /// <param name="Text">The text without markers.</param>
 /// <param name="Marks">Marker positions in order of appearance.</param>

@@ -2,30 +2,26 @@ using SpecLint.Core.Analysis.Tolerance;
 using SpecLint.Core.Config;
 using SpecLint.Core.Spec.Model;
 using SpecLint.Core.Units;
-using SpecLint.Rules.Checking;
+namespace SpecLint.Rules.Checking;
 
-namespace SpecLint.Cli;
-
-/// <summary>Runs a check with the analysis pieces the tool ships.</summary>
-internal static class Checker
+/// <summary>The tolerance analysis a check runs: corners always, Monte Carlo in the main run, thresholds from the configuration.</summary>
+public static class StandardTolerances
 {
     private const string PhaseMarginRule = "phase-margin";
     private const string PeakingRule = "peaking";
-
-    public static CheckRun Run(CheckOptions options) => CheckRunner.Run(options, Tolerances);
 
     /// <summary>
     /// Corners for every analysis, Monte Carlo only when <paramref name="monteCarlo"/> is set (the main run,
     /// never a fix re-check), with the repository's samples, seed and distribution.
     /// </summary>
-    internal static ToleranceResult? Tolerances(TiaSpec spec, RepoConfig config, bool monteCarlo) =>
+    public static ToleranceResult? Analyze(TiaSpec spec, RepoConfig config, bool monteCarlo) =>
         ToleranceAnalyzer.Analyze(spec, OptionsFor(config, monteCarlo));
 
     /// <summary>
     /// The yield thresholds are the ones the rules judge by: the spec's requirement first (the analyzer reads
     /// it), else <c>rules: phase-margin: floor</c> and <c>rules: peaking: max</c>, else 45° and 1 dB.
     /// </summary>
-    internal static ToleranceOptions OptionsFor(RepoConfig config, bool monteCarlo)
+    public static ToleranceOptions OptionsFor(RepoConfig config, bool monteCarlo)
     {
         ArgumentNullException.ThrowIfNull(config);
         var d = ToleranceOptions.CornersOnly;
