@@ -34,7 +34,7 @@ internal static class CornerSection
         }
 
         yield return string.Create(CultureInfo.InvariantCulture,
-            $"**Monte Carlo**: {mc.Samples} samples, seed {mc.Seed}, {mc.Distribution} distribution; yield {100 * mc.Yield:0.0}% ({string.Join(", ", mc.YieldByCheck.Select(kv => $"{kv.Key} {100 * kv.Value:0.0}%"))}).");
+            $"**Monte Carlo**: {mc.Samples} samples, seed {mc.ConfiguredSeed}, {mc.Distribution} distribution; yield {100 * mc.Yield:0.0}% ({string.Join(", ", mc.YieldByCheck.Select(kv => $"{kv.Key} {100 * kv.Value:0.0}%"))}).");
         yield return "";
         yield return "| Percentile | Phase margin | Bandwidth |";
         yield return "|---:|---:|---:|";

@@ -192,10 +192,10 @@ public sealed class CornerSearchTests
         var spec = Channel(cf: Spread<Capacitance>.From(parsed));
         var r = ToleranceAnalyzer.Analyze(spec, ToleranceOptions.CornersOnly)!;
         var cf = r.VariedParameters.Single(p => p.Label == "Cf");
-        Assert.True(cf.Low == "430 fF" && cf.High == "930 fF", $"{cf.Low} .. {cf.High}: {cf.Source}");
-        Assert.Equal("430 fF", cf.Low);
-        Assert.Equal("930 fF", cf.High);
-        Assert.True(cf.Source.Contains("±250 fF", StringComparison.Ordinal), cf.Source);
+        Assert.True(cf.Low == "0.43 pF" && cf.High == "0.93 pF", $"{cf.Low} .. {cf.High}: {cf.Source}");
+        Assert.Equal("0.43 pF", cf.Low);
+        Assert.Equal("0.93 pF", cf.High);
+        Assert.True(cf.Source.Contains("±0.25 pF", StringComparison.Ordinal), cf.Source);
         var low = ToleranceAnalyzer.CircuitAt(spec, r.PhaseMarginMinAt).Cf.Farads;
         Assert.Equal(0.37, 1 - (low / 0.68e-12), 0.005);
     }
