@@ -28,6 +28,7 @@ internal static class QuantityKeys
         ["/amplifier/input-capacitance/common-mode"] = Dimension.Capacitance,
         ["/amplifier/input-capacitance/differential"] = Dimension.Capacitance,
         ["/amplifier/bias-current"] = Dimension.Current,
+        ["/amplifier/bias-current-doubling"] = Dimension.Temperature,
         ["/amplifier/offset-voltage"] = Dimension.Voltage,
         ["/amplifier/output-swing/to-negative"] = Dimension.Voltage,
         ["/amplifier/output-swing/to-positive"] = Dimension.Voltage,

@@ -83,6 +83,15 @@ internal sealed partial class SpecModelReader(YamlTree tree, DiagnosticSink sink
             }
         });
 
+        var doubling = SingleOf<Temperature>("/amplifier/bias-current-doubling", (p, q) =>
+        {
+            // A difference, so °C (which adds 273.15) is a mistake here; nobody means a 200 K doubling interval.
+            if (q.Typ < 0 || q.Typ > 200)
+            {
+                sink.AtValue(p, "the bias-current doubling interval is a temperature difference: write it in K, between 0 K and 200 K, e.g. \"10 K\"");
+            }
+        });
+
         var rf = SpreadOf<Resistance>("/feedback/resistance", (p, q) => CheckPositive(p, q, "the feedback resistance", "1 MΩ ±1%"));
         var cf = SpreadOf<Capacitance>("/feedback/capacitance", (p, q) => CheckCapacitance(p, q, "the feedback capacitance", inFeedback: true));
         var dielectric = Str("/feedback/dielectric");
@@ -125,7 +134,7 @@ internal sealed partial class SpecModelReader(YamlTree tree, DiagnosticSink sink
             Req(bias),
             new SensorInput(sensorType, Req(sensorC), shunt, dark ?? Spread<Current>.Exact(Current.FromSi(0)), Req(iMin), Req(iMax), direction, responsivity),
             new Amplifier(Req(gbw), aol ?? Gain.FromDecibels(120), secondPole, Req(en), enCorner, Req(inNoise), inCorner,
-                Req(ccm), Req(cdiff), Req(ib), Req(vos), Req(swingNeg), Req(swingPos), slew, minGain),
+                Req(ccm), Req(cdiff), Req(ib), Req(vos), Req(swingNeg), Req(swingPos), slew, minGain) { BiasCurrentDoubling = doubling },
             new Feedback(Req(rf), cf, dielectric, cpar ?? Spread<Capacitance>.Exact(Capacitance.Zero)),
             new Board(stray ?? Spread<Capacitance>.Exact(Capacitance.Zero)),
             new Requirements(bandwidth, pm, peaking?.Decibels, noise),

@@ -25,7 +25,8 @@ internal sealed class ToleranceBox
         var nominalT = spec.Conditions.Nominal;
         _typical = CircuitFactory.Create(spec, nominalT, TypicalPicker.Instance);
         _ibAt25 = _typical.Ib.Amperes;
-        _doublingKelvin = options.BiasCurrentDoublingKelvin;
+        // The spec's own figure for its op-amp wins over the run-wide default.
+        _doublingKelvin = spec.Amplifier.BiasCurrentDoubling?.Kelvin ?? options.BiasCurrentDoublingKelvin;
 
         var axes = new List<ToleranceAxis>();
         var fb = spec.Feedback;
@@ -65,7 +66,7 @@ internal sealed class ToleranceBox
         var temp = spec.Conditions.Temperature;
         if (temp.Min.Kelvin < temp.Max.Kelvin)
         {
-            var ib = double.IsPositiveInfinity(_doublingKelvin)
+            var ib = (double.IsPositiveInfinity(_doublingKelvin) || _doublingKelvin <= 0)
                 ? "Ib fixed"
                 : string.Create(CultureInfo.InvariantCulture, $"Ib doubles every {_doublingKelvin:0.##} K from 25 °C");
             axes.Add(new ToleranceAxis(AxisKind.Temperature, "/conditions/temperature", "T",

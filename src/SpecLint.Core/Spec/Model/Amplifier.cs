@@ -33,4 +33,11 @@ public sealed record Amplifier(
     Voltage SwingToNegative,
     Voltage SwingToPositive,
     SlewRate? SlewRate,
-    Gain? MinStableGain);
+    Gain? MinStableGain)
+{
+    /// <summary>
+    /// The temperature rise over which the bias current doubles (a difference, held in kelvin), or null for the
+    /// default of 10 K (common practice for FET inputs); 0 K keeps the bias current constant.
+    /// </summary>
+    public Temperature? BiasCurrentDoubling { get; init; }
+}
