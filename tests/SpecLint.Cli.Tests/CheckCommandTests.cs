@@ -170,6 +170,28 @@ public sealed class CheckCommandTests
     }
 
     [Fact]
+    public void Github_format_appends_the_report_to_the_job_summary()
+    {
+        using var cli = new CliHarness();
+        cli.Write("hw/x.tia.yaml", Specs.NoCf);
+        var summary = cli.Write("summary.md", "earlier step\n");
+        Environment.SetEnvironmentVariable("GITHUB_STEP_SUMMARY", summary);
+        try
+        {
+            cli.Run("check", "hw", "--format", "github");
+        }
+        finally
+        {
+            Environment.SetEnvironmentVariable("GITHUB_STEP_SUMMARY", null);
+        }
+
+        var text = File.ReadAllText(summary);
+        Assert.StartsWith("earlier step\n", text, StringComparison.Ordinal);
+        Assert.Contains("| Spec | Result |", text, StringComparison.Ordinal);
+        Assert.Contains("phase-margin", text, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Expired_waiver_is_an_error_as_of_the_given_day()
     {
         using var cli = new CliHarness();

@@ -9,7 +9,7 @@ namespace SpecLint.Rules.Engine;
 /// What a rule sees while it checks one spec: the typed spec, its analysis, its options, and helpers to
 /// report findings at the right line. Built-in rules and house rules get exactly this.
 /// </summary>
-public sealed partial class RuleContext
+public sealed class RuleContext
 {
     private readonly RuleDescriptor _descriptor;
     private readonly RuleConfiguration _configuration;
