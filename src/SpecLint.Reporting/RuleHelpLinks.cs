@@ -11,6 +11,12 @@ public static class RuleHelpLinks
     /// <summary>The project's home page.</summary>
     public const string Project = "https://github.com/speclint/speclint";
 
-    /// <summary>The page of one rule.</summary>
-    public static string For(string ruleId) => DocsBase + Uri.EscapeDataString(ruleId) + "/" + Uri.EscapeDataString(ruleId) + ".md";
+    /// <summary>The page about the engine's own finding ids (spec-invalid, waiver-expired, ...).</summary>
+    public const string EngineFindings = Project + "/blob/main/docs/engine-findings.md";
+
+    /// <summary>The page of one rule, or the section of the engine page for an engine id.</summary>
+    public static string For(string ruleId) =>
+        RuleIds.EngineIds.Contains(ruleId)
+            ? EngineFindings + "#" + Uri.EscapeDataString(ruleId)
+            : DocsBase + Uri.EscapeDataString(ruleId) + "/" + Uri.EscapeDataString(ruleId) + ".md";
 }

@@ -207,6 +207,10 @@ public sealed class CheckCommandTests
     {
         using var cli = new CliHarness();
         Assert.Equal(2, cli.Run("check", "nowhere").Exit);
+        Directory.CreateDirectory(cli.Path_("empty"));
+        var (exit, output, _) = cli.Run("check", "empty");
+        Assert.Equal(2, exit);
+        Assert.Contains("error no-specs: no spec files matching **/*.tia.yaml", output, StringComparison.Ordinal);
         Assert.Equal(2, cli.Run("check", "--format", "xml").Exit);
         Assert.Equal(2, cli.Run("check", "--as-of", "31/03/2027").Exit);
     }

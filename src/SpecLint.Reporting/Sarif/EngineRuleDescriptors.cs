@@ -16,6 +16,7 @@ public static class EngineRuleDescriptors
         [RuleIds.WaiverExpired] = new(RuleIds.WaiverExpired, "Waivers in the spec have not passed their expiry date", Severity.Error),
         [RuleIds.WaiverUnmatched] = new(RuleIds.WaiverUnmatched, "Every live waiver still matches a finding", Severity.Warning),
         [RuleIds.AnalysisFailed] = new(RuleIds.AnalysisFailed, "The circuit analysis produced a result for the spec", Severity.Error),
+        [RuleIds.NoSpecs] = new(RuleIds.NoSpecs, "The check found at least one spec file", Severity.Error),
     };
 
     /// <summary>The descriptor of an engine id, or null for any other id.</summary>

@@ -35,6 +35,12 @@ public static class CheckRunner
             problems.Add(new Finding(RuleIds.SpecInvalid, Severity.Error, m, "", 1, 1, "no such file or folder"));
         }
 
+        if (files.Count == 0 && missing.Count == 0)
+        {
+            problems.Add(new Finding(RuleIds.NoSpecs, Severity.Error, string.Join(", ", paths), "", 1, 1,
+                $"no spec files matching {string.Join(", ", rootConfig.Include)} were found; check the path, or 'include' in .speclint.yaml"));
+        }
+
         var outcomes = new List<SpecOutcome>();
         for (var i = 0; i < files.Count; i++)
         {

@@ -21,6 +21,9 @@ public static class RuleIds
     /// <summary>The analysis could not produce a result for a spec (a numerical failure, reported, not thrown).</summary>
     public const string AnalysisFailed = "analysis-failed";
 
+    /// <summary>A check that found no spec file at all: a wrong path or include glob must not pass silently.</summary>
+    public const string NoSpecs = "no-specs";
+
     /// <summary>All engine ids.</summary>
-    public static IReadOnlyList<string> EngineIds { get; } = [SpecInvalid, ConfigInvalid, WaiverExpired, WaiverUnmatched, AnalysisFailed];
+    public static IReadOnlyList<string> EngineIds { get; } = [SpecInvalid, ConfigInvalid, WaiverExpired, WaiverUnmatched, AnalysisFailed, NoSpecs];
 }
