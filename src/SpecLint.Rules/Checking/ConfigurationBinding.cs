@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using SpecLint.Core.Config;
 using SpecLint.Core.Spec;
+using SpecLint.Core.Spec.Schema;
 using SpecLint.Core.Units;
 using SpecLint.Rules.Engine;
 
@@ -56,7 +57,7 @@ public static class ConfigurationBinding
             if (rule is null)
             {
                 var known = catalog.Rules.Select(r => r.Descriptor.Id).ToList();
-                var hint = Suggest.Closest(id, known) is { } s ? $" (did you mean '{s}'?)" : "";
+                var hint = EditDistance.Closest(id, known) is { } s ? $" (did you mean '{s}'?)" : "";
                 yield return Problem(displayPath, KeyOf(settings.Position), "/rules/" + id, $"rules: '{id}' is not a rule{hint}; 'speclint rules' lists the ids");
                 continue;
             }
@@ -67,7 +68,7 @@ public static class ConfigurationBinding
                 if (declared is null)
                 {
                     var keys = rule.Descriptor.Options.Select(o => o.Key).ToList();
-                    var hint = Suggest.Closest(key, keys) is { } s ? $" (did you mean '{s}'?)" : "";
+                    var hint = EditDistance.Closest(key, keys) is { } s ? $" (did you mean '{s}'?)" : "";
                     var allowed = keys.Count == 0 ? "it has no options besides severity" : "its options are " + string.Join(", ", keys);
                     yield return Problem(displayPath, KeyOf(option.Position), $"/rules/{id}/{key}", $"rules.{id}: unknown option '{key}'{hint}; {allowed}");
                     continue;

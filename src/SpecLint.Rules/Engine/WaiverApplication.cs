@@ -51,5 +51,5 @@ public static class WaiverApplication
     }
 
     private static string DidYouMean(string id, IEnumerable<string> known) =>
-        Checking.Suggest.Closest(id, known) is { } s ? $" (did you mean '{s}'?)" : "";
+        Core.Spec.Schema.EditDistance.Closest(id, known) is { } s ? $" (did you mean '{s}'?)" : "";
 }
