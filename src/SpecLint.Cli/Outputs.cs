@@ -93,8 +93,8 @@ internal static class Outputs
     {
         var full = Path.GetFullPath(sarifPath);
         Directory.CreateDirectory(Path.GetDirectoryName(full)!);
-        var rules = RuleCatalog.BuiltIn.Rules;
-        var pages = rules.Select(r => r.Descriptor.Id).Select(id => (id, page: RuleDocs.Page(id))).Where(x => x.page is not null).ToDictionary(x => x.id, x => x.page!);
+        var rules = run.Catalog.Rules;
+        var pages = rules.Select(r => r.Descriptor.Id).Select(id => (id, page: run.Catalog.Page(id))).Where(x => x.page is not null).ToDictionary(x => x.id, x => x.page!);
         var options = new SarifOptions(MarkdownReport.ToolVersion) { RulePages = pages, RepositoryRoot = Directory.GetCurrentDirectory() };
         File.WriteAllText(full, SarifWriter.Write(rules.Select(r => r.Descriptor), run.AllFindings.ToList(), options), Utf8);
     }

@@ -17,6 +17,8 @@ public static class SpecLintApp
             SchemaCommand.Create(),
             RulesCommand.Create(),
             ExplainCommand.Create(),
+            NewRuleCommand.Create(),
+            TestRulesCommand.Create(),
         };
 
         var parse = root.Parse(args);

@@ -22,9 +22,10 @@ internal static class CheckCommand
         var asOf = new Option<string?>("--as-of") { Description = "Judge waiver expiry dates as of this day (YYYY-MM-DD; default today)" };
         var nominal = new Option<bool>("--nominal-only") { Description = "Skip tolerance corners and Monte Carlo" };
         var quiet = new Option<bool>("--quiet") { Description = "No progress on stderr" };
+        var noHouseRules = new Option<bool>("--no-house-rules") { Description = "Do not compile or run the repository's house rules (for pull requests from untrusted forks)" };
         var command = new Command("check", "Check spec files: schema, analysis, rules. Exit 0 pass, 1 findings at the fail level, 2 unusable input")
         {
-            paths, format, report, html, sarif, failOn, config, asOf, nominal, quiet,
+            paths, format, report, html, sarif, failOn, config, asOf, nominal, quiet, noHouseRules,
         };
         command.SetAction(parse =>
         {
@@ -63,6 +64,7 @@ internal static class CheckCommand
                 FailOn = parse.GetValue(failOn) is null ? null : fail,
                 Tolerances = !parse.GetValue(nominal),
                 Progress = Progress.For(error, parse.GetValue(quiet)),
+                HouseRules = parse.GetValue(noHouseRules) ? null : HouseRuleSources.Create(),
             };
             var run = CheckRunner.Run(options);
             Outputs.Write(run, request, output);

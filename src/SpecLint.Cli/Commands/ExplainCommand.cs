@@ -13,10 +13,12 @@ internal static class ExplainCommand
         command.SetAction(parse =>
         {
             var wanted = parse.GetValue(id)!;
-            var page = RuleDocs.Page(wanted);
+            var catalog = RuleCatalog.BuiltIn.Find(wanted) is null ? HouseRuleSources.ForWorkingFolder().Catalog : RuleCatalog.BuiltIn;
+            var page = catalog.Page(wanted);
             if (page is null)
             {
-                parse.InvocationConfiguration.Error.WriteLine($"speclint: no rule '{wanted}'. Known ids: {string.Join(", ", RuleCatalog.BuiltIn.Rules.Select(r => r.Descriptor.Id))}");
+                var why = catalog.Find(wanted) is null ? $"no rule '{wanted}'" : $"house rule '{wanted}' has no page; add {wanted}.md beside its class";
+                parse.InvocationConfiguration.Error.WriteLine($"speclint: {why}. Known ids: {string.Join(", ", catalog.Rules.Select(r => r.Descriptor.Id))}");
                 return ExitCodes.UnusableInput;
             }
 

@@ -12,4 +12,10 @@ public sealed record RuleSettings(string RuleId, ConfigSeverity? Severity, Immut
 {
     /// <summary>True when the configuration turns the rule off.</summary>
     public bool IsOff => Severity == ConfigSeverity.Off;
+
+    /// <summary>
+    /// When not empty, the rule runs only on specs that carry at least one of these tags (<c>tags: [medical]</c>
+    /// under the rule's entry); empty means every spec.
+    /// </summary>
+    public ImmutableArray<string> Tags { get; init; } = [];
 }

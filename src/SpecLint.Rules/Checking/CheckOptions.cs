@@ -23,6 +23,9 @@ public sealed record CheckOptions
     /// <summary>The rules to run.</summary>
     public RuleCatalog Catalog { get; init; } = RuleCatalog.BuiltIn;
 
+    /// <summary>Compiles and loads the house rules a configuration names; null skips house rules (<c>--no-house-rules</c>).</summary>
+    public IHouseRuleSource? HouseRules { get; init; }
+
     /// <summary>Reports progress (file index, count, file) for long runs; null for none.</summary>
     public Action<int, int, string>? Progress { get; init; }
 }

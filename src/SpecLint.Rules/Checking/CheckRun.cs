@@ -14,6 +14,9 @@ public sealed record CheckRun(
     Severity FailOn,
     ImmutableArray<string> ConfigFiles)
 {
+    /// <summary>The rules the run used: the built-in rules plus the house rules of every configuration it read.</summary>
+    public RuleCatalog Catalog { get; init; } = RuleCatalog.BuiltIn;
+
     /// <summary>Every finding of the run, spec findings first.</summary>
     public IEnumerable<Finding> AllFindings => Specs.SelectMany(s => s.Findings).Concat(RunProblems);
 
@@ -25,7 +28,8 @@ public sealed record CheckRun(
     {
         get
         {
-            if (!RunProblems.IsEmpty || Specs.Any(s => s.IsUnusable))
+            if (RunProblems.Any(f => f.Severity == Severity.Error && !f.Waived) || Specs.Any(s => s.IsUnusable)
+                || AllFindings.Any(f => f.Severity == Severity.Error && RuleIds.HouseRuleIds.Contains(f.RuleId)))
             {
                 return ExitCodes.UnusableInput;
             }
