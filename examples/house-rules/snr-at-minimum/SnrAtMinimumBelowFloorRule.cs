@@ -24,6 +24,6 @@ public sealed class SnrAtMinimumBelowFloorRule : IRule
         }
 
         yield return context.Report("/input/current/min", string.Create(CultureInfo.InvariantCulture,
-            $"the smallest signal is {snr:0.#} dB above the {noise.InputRms} rms input noise in {noise.BandLow} .. {noise.BandHigh}, below the team's {min.Decibels:0.#} dB; narrow the band, raise Rf or choose a quieter op-amp"));
+            $"the smallest signal is {snr:0.#} dB above the {Fmt.Q(noise.InputRms)} rms input noise in {Fmt.Hz(noise.BandLow)} .. {Fmt.Hz(noise.BandHigh)}, below the team's {min.Decibels:0.#} dB; narrow the band, raise Rf or choose a quieter op-amp"));
     }
 }

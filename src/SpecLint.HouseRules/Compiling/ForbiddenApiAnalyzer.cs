@@ -3,7 +3,6 @@ using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.CSharp;
 using Microsoft.CodeAnalysis.CSharp.Syntax;
 using Microsoft.CodeAnalysis.Diagnostics;
-using SpecLint.Rules.Engine;
 
 namespace SpecLint.HouseRules.Compiling;
 
@@ -15,8 +14,11 @@ namespace SpecLint.HouseRules.Compiling;
 [DiagnosticAnalyzer(LanguageNames.CSharp)]
 internal sealed class ForbiddenApiAnalyzer : DiagnosticAnalyzer
 {
+    // Roslyn ids must be identifiers; the finding is reported under house-rule-forbidden.
+    public const string DiagnosticId = "SpecLintForbiddenApi";
+
     public static readonly DiagnosticDescriptor Forbidden = new(
-        RuleIds.HouseRuleForbidden,
+        DiagnosticId,
         "An API a house rule may not use",
         "{0} is not allowed in a house rule ({1}); a house rule reads the spec and its analysis through RuleContext and reports findings, nothing else",
         "HouseRules",
@@ -30,7 +32,7 @@ internal sealed class ForbiddenApiAnalyzer : DiagnosticAnalyzer
         context.ConfigureGeneratedCodeAnalysis(GeneratedCodeAnalysisFlags.Analyze | GeneratedCodeAnalysisFlags.ReportDiagnostics);
         context.EnableConcurrentExecution();
         context.RegisterSyntaxNodeAction(OnName, SyntaxKind.IdentifierName, SyntaxKind.GenericName);
-        context.RegisterSyntaxNodeAction(OnImplicitCreation, SyntaxKind.ImplicitObjectCreationExpression);
+        context.RegisterSyntaxNodeAction(OnCreation, SyntaxKind.ImplicitObjectCreationExpression, SyntaxKind.ObjectCreationExpression);
         context.RegisterSyntaxNodeAction(c => Report(c, c.Node.GetFirstToken().GetLocation(), "unsafe code", ApiFamily.Unsafe),
             SyntaxKind.UnsafeStatement, SyntaxKind.PointerType, SyntaxKind.FunctionPointerType, SyntaxKind.FixedStatement,
             SyntaxKind.AddressOfExpression, SyntaxKind.PointerIndirectionExpression, SyntaxKind.PointerMemberAccessExpression,
@@ -65,7 +67,8 @@ internal sealed class ForbiddenApiAnalyzer : DiagnosticAnalyzer
         }
     }
 
-    private static void OnImplicitCreation(SyntaxNodeAnalysisContext context)
+    // The constructor, not only the type name: `new Random()` differs from `new Random(42)`.
+    private static void OnCreation(SyntaxNodeAnalysisContext context)
     {
         var info = context.SemanticModel.GetSymbolInfo(context.Node, context.CancellationToken);
         if ((info.Symbol ?? info.CandidateSymbols.FirstOrDefault()) is IMethodSymbol ctor)

@@ -63,8 +63,8 @@ internal static class HouseRuleCompiler
             new AnalyzerOptions([]), onAnalyzerException: null, concurrentAnalysis: false, logAnalyzerExecutionTime: false));
         var diagnostics = withAnalyzers.GetAllDiagnosticsAsync().GetAwaiter().GetResult();
         var problems = diagnostics
-            .Where(d => d.Severity >= DiagnosticSeverity.Warning && !d.IsSuppressed && d.Location.IsInSource && d.Location.SourceTree != usings)
-            .Select(ToProblem)
+            .Where(d => d.Severity >= DiagnosticSeverity.Warning && !d.IsSuppressed && d.Location.SourceTree != usings)
+            .Select(d => ToProblem(d, files[0].RelativePath))
             .Distinct()
             .OrderBy(p => p.Path, StringComparer.Ordinal).ThenBy(p => p.Line).ThenBy(p => p.Column).ThenBy(p => p.Message, StringComparer.Ordinal)
             .ToList();
@@ -90,7 +90,7 @@ internal static class HouseRuleCompiler
         {
             // The sources compiled on their own, so this is SpecLint's instrumentation failing: say so plainly.
             var first = emitted.Diagnostics.First(d => d.Severity == DiagnosticSeverity.Error);
-            var p = ToProblem(first);
+            var p = ToProblem(first, files[0].RelativePath);
             problems.Add(p with { Message = "SpecLint could not instrument this code for its time budget (a SpecLint bug; please report it): " + p.Message });
             return new CompiledRules(null, null, [.. problems], rules);
         }
@@ -98,13 +98,17 @@ internal static class HouseRuleCompiler
         return new CompiledRules(pe.ToArray(), pdb.ToArray(), [.. problems], rules);
     }
 
-    private static CompileProblem ToProblem(Diagnostic d)
+    // A diagnostic without a source position (an analyzer that failed, a missing reference) is shown at the start of the first file.
+    private static CompileProblem ToProblem(Diagnostic d, string firstFile)
     {
-        var span = d.Location.GetMappedLineSpan();
-        var id = d.Id == RuleIds.HouseRuleForbidden ? RuleIds.HouseRuleForbidden : RuleIds.HouseRuleInvalid;
-        var message = d.Id == RuleIds.HouseRuleForbidden ? d.GetMessage(System.Globalization.CultureInfo.InvariantCulture)
+        var span = d.Location.IsInSource ? d.Location.GetMappedLineSpan() : new FileLinePositionSpan(firstFile, default, default);
+        var forbidden = d.Id == ForbiddenApiAnalyzer.DiagnosticId;
+        var id = forbidden ? RuleIds.HouseRuleForbidden : RuleIds.HouseRuleInvalid;
+        var message = forbidden ? d.GetMessage(System.Globalization.CultureInfo.InvariantCulture)
             : $"{d.Id}: {d.GetMessage(System.Globalization.CultureInfo.InvariantCulture)}";
-        return new CompileProblem(id, d.Severity == DiagnosticSeverity.Error ? Severity.Error : Severity.Warning,
+        // An analyzer that failed (AD0001) leaves the allow-list unchecked: that must not pass as a warning.
+        var error = d.Severity == DiagnosticSeverity.Error || d.Id == "AD0001";
+        return new CompileProblem(id, error ? Severity.Error : Severity.Warning,
             span.Path, span.StartLinePosition.Line + 1, span.StartLinePosition.Character + 1, message);
     }
 
