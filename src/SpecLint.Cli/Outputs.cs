@@ -95,7 +95,8 @@ internal static class Outputs
         Directory.CreateDirectory(Path.GetDirectoryName(full)!);
         var rules = run.Catalog.Rules;
         var pages = rules.Select(r => r.Descriptor.Id).Select(id => (id, page: run.Catalog.Page(id))).Where(x => x.page is not null).ToDictionary(x => x.id, x => x.page!);
-        var options = new SarifOptions(MarkdownReport.ToolVersion) { RulePages = pages, RepositoryRoot = Directory.GetCurrentDirectory() };
+        var houseRules = rules.Select(r => r.Descriptor.Id).Where(run.Catalog.IsHouseRule).ToDictionary(id => id, id => run.Catalog.HouseRuleSource(id)!);
+        var options = new SarifOptions(MarkdownReport.ToolVersion) { RulePages = pages, RepositoryRoot = Directory.GetCurrentDirectory(), HouseRuleSources = houseRules };
         File.WriteAllText(full, SarifWriter.Write(rules.Select(r => r.Descriptor), run.AllFindings.ToList(), options), Utf8);
     }
 
