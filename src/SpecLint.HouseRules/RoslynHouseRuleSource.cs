@@ -12,7 +12,7 @@ namespace SpecLint.HouseRules;
 /// The house rules of a configuration: the C# files it names, compiled with Roslyn (or taken from the cache),
 /// loaded, and guarded. Every problem becomes a finding at its .cs position; none stops the check.
 /// </summary>
-public sealed class RoslynHouseRuleSource : IHouseRuleSource
+internal sealed class RoslynHouseRuleSource : IHouseRuleSource
 {
     private readonly HouseRuleCache _cache;
     private readonly RuleCatalog _builtIn;

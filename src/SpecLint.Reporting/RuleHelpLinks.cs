@@ -3,7 +3,7 @@ using SpecLint.Rules.Engine;
 namespace SpecLint.Reporting;
 
 /// <summary>Links to the project and to each rule's page (the base lives in <see cref="RuleDocs"/>, in one place).</summary>
-public static class RuleHelpLinks
+internal static class RuleHelpLinks
 {
     /// <summary>The folder of the rule pages, with a trailing slash.</summary>
     public const string DocsBase = RuleDocs.HelpBase + "/";

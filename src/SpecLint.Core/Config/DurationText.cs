@@ -3,7 +3,7 @@ using System.Globalization;
 namespace SpecLint.Core.Config;
 
 /// <summary>Reads a short duration written with its unit, such as <c>2 s</c> or <c>500 ms</c> (the house-rule budget).</summary>
-public static class DurationText
+internal static class DurationText
 {
     /// <summary>The longest budget accepted: beyond this a rule is not being budgeted at all.</summary>
     public static readonly TimeSpan Max = TimeSpan.FromMinutes(10);

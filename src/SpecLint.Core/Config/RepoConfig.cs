@@ -10,7 +10,7 @@ namespace SpecLint.Core.Config;
 /// <param name="MonteCarlo">Monte Carlo settings.</param>
 /// <param name="Rules">Per-rule settings by rule id.</param>
 /// <param name="Locations">Where each key sits in the file.</param>
-public sealed record RepoConfig(
+internal sealed record RepoConfig(
     string? Path,
     ImmutableArray<string> Include,
     ConfigSeverity FailOn,

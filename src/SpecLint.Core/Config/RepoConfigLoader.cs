@@ -9,7 +9,7 @@ using SpecLint.Core.Spec.Yaml;
 namespace SpecLint.Core.Config;
 
 /// <summary>Finds and reads <c>.speclint.yaml</c> with the same YAML hardening and schema checks as spec files.</summary>
-public static class RepoConfigLoader
+internal static class RepoConfigLoader
 {
     /// <summary>
     /// The nearest <c>.speclint.yaml</c> at or above the spec's folder, or null. The walk stops at the filesystem

@@ -8,7 +8,7 @@ namespace SpecLint.Core.Config;
 /// <param name="Severity">The severity override, or null to keep the rule's default.</param>
 /// <param name="Options">The rule's own options (everything but <c>severity</c>), by key.</param>
 /// <param name="Position">Where the rule's entry sits (its key), for messages such as an unknown rule id.</param>
-public sealed record RuleSettings(string RuleId, ConfigSeverity? Severity, ImmutableDictionary<string, RuleOption> Options, SourcePosition Position)
+internal sealed record RuleSettings(string RuleId, ConfigSeverity? Severity, ImmutableDictionary<string, RuleOption> Options, SourcePosition Position)
 {
     /// <summary>True when the configuration turns the rule off.</summary>
     public bool IsOff => Severity == ConfigSeverity.Off;

@@ -11,7 +11,7 @@ namespace SpecLint.Reporting.Json;
 /// The machine-readable output of DESIGN §5. Field names are a contract: extend, never rename. Written
 /// with a forward-only writer so key order and number formatting are identical on every run.
 /// </summary>
-public static class JsonReport
+internal static class JsonReport
 {
     /// <summary>The JSON document for a run, indented, with a trailing newline.</summary>
     public static string Write(CheckRun run)

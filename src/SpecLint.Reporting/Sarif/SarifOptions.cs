@@ -2,7 +2,7 @@ namespace SpecLint.Reporting.Sarif;
 
 /// <summary>What <see cref="SarifWriter"/> needs besides the rules and findings.</summary>
 /// <param name="ToolVersion">SpecLint's version, written as <c>tool.driver.version</c>.</param>
-public sealed record SarifOptions(string ToolVersion)
+internal sealed record SarifOptions(string ToolVersion)
 {
     /// <summary>Rule documentation pages (Markdown, <c>rules/&lt;id&gt;/&lt;id&gt;.md</c>) by rule id; they give the full description and help.</summary>
     public IReadOnlyDictionary<string, string> RulePages { get; init; } = new Dictionary<string, string>();

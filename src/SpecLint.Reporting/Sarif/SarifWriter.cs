@@ -13,7 +13,7 @@ namespace SpecLint.Reporting.Sarif;
 /// fingerprints, and waived findings as in-source suppressions. Output is deterministic: results are ordered by
 /// file, line, column and rule, and nothing depends on the clock or the culture.
 /// </summary>
-public static class SarifWriter
+internal static class SarifWriter
 {
     /// <summary>The schema URI written as <c>$schema</c>.</summary>
     public const string SchemaUri = "https://json.schemastore.org/sarif-2.1.0.json";

@@ -3,7 +3,7 @@ using SpecLint.Rules.Engine;
 namespace SpecLint.Rules.Checking;
 
 /// <summary>What a <c>check</c> run is asked to do.</summary>
-public sealed record CheckOptions
+internal sealed record CheckOptions
 {
     /// <summary>Files and folders to check; empty means the repository that contains the working directory.</summary>
     public IReadOnlyList<string> Paths { get; init; } = [];

@@ -8,7 +8,7 @@ namespace SpecLint.Rules.Checking;
 /// <param name="RunProblems">Findings that belong to no spec: configuration errors, paths that do not exist.</param>
 /// <param name="FailOn">The lowest severity that fails the run.</param>
 /// <param name="ConfigFiles">The configuration files used (for the report's run context).</param>
-public sealed record CheckRun(
+internal sealed record CheckRun(
     ImmutableArray<SpecOutcome> Specs,
     ImmutableArray<Finding> RunProblems,
     Severity FailOn,

@@ -11,7 +11,7 @@ namespace SpecLint.Rules.Checking;
 /// One <c>check</c>: finds the spec files, reads each with its repository configuration, analyses it, runs
 /// the rules, applies waivers. A file that cannot be read is reported and the others are still checked.
 /// </summary>
-public static class CheckRunner
+internal static class CheckRunner
 {
     /// <summary>
     /// Runs a check. Never throws for bad input; an exception here is a SpecLint bug. <paramref name="tolerances"/>

@@ -3,7 +3,7 @@ using SpecLint.Core.Config;
 namespace SpecLint.Rules.Checking;
 
 /// <summary>Recognises the case specs that sit beside house rules (<c>&lt;folder&gt;/&lt;id&gt;/cases/*.tia.yaml</c>).</summary>
-public static class HouseRuleCases
+internal static class HouseRuleCases
 {
     /// <summary>True when <paramref name="file"/> lies in a <c>cases</c> folder inside one of the configuration's house-rule folders.</summary>
     public static bool IsCase(string file, RepoConfig config)

@@ -8,7 +8,7 @@ namespace SpecLint.Rules.Checking;
 /// <param name="Problems">Compile errors and warnings, forbidden APIs and layout problems, at their .cs positions.</param>
 /// <param name="Pages">Each rule's page (<c>&lt;id&gt;.md</c> beside its class), by id, where one exists.</param>
 /// <param name="Sources">The .cs file that declares each rule, by id.</param>
-public sealed record HouseRuleSet(
+internal sealed record HouseRuleSet(
     ImmutableArray<IRule> Rules,
     ImmutableArray<Finding> Problems,
     ImmutableDictionary<string, string> Pages,

@@ -8,7 +8,7 @@ namespace SpecLint.Rules.Checking;
 /// Runs every enabled rule on one analysed spec, with configuration applied. Fix searches get a check that
 /// re-runs the other rules on each candidate, so a suggested value never trades one error for another.
 /// </summary>
-public sealed class RuleRunner
+internal sealed class RuleRunner
 {
     private readonly RuleCatalog _catalog;
     private readonly RepoConfig _config;

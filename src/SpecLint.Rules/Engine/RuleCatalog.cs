@@ -8,7 +8,7 @@ namespace SpecLint.Rules.Engine;
 /// The rules a run uses, discovered by reflection: every public, non-abstract <see cref="IRule"/> with a
 /// parameterless constructor in the given assemblies. No hand-kept list, so a rule cannot be forgotten.
 /// </summary>
-public sealed class RuleCatalog
+internal sealed class RuleCatalog
 {
     private readonly ImmutableDictionary<string, string> _housePages;
     private readonly ImmutableDictionary<string, string> _houseSources;

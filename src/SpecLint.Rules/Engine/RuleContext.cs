@@ -17,8 +17,8 @@ public sealed class RuleContext
 
     private readonly ISpecAnalyzer _analyzer;
 
-    /// <summary>Creates a context for one rule and one analysed spec.</summary>
-    public RuleContext(
+    /// <summary>Creates a context for one rule and one analysed spec (the engine does; rules receive it).</summary>
+    internal RuleContext(
         SpecAnalysis analysis,
         ISpecAnalyzer analyzer,
         RuleDescriptor descriptor,
@@ -51,10 +51,10 @@ public sealed class RuleContext
     /// False while the engine re-checks another rule's fix: rules then report findings only and do not
     /// search for fixes of their own (which keeps verification cheap and free of recursion).
     /// </summary>
-    public bool SearchFixes { get; init; } = true;
+    public bool SearchFixes { get; internal init; } = true;
 
     /// <summary>Runs the other enabled rules on a candidate spec and tells whether any error-level rule that was clean now fails.</summary>
-    public Func<TiaSpec, string, bool>? OtherRulesCheck { get; init; }
+    internal Func<TiaSpec, string, bool>? OtherRulesCheck { get; init; }
 
     /// <summary>
     /// True when <paramref name="candidate"/> trips no error-level rule (besides this one) that passes for the

@@ -18,7 +18,7 @@ namespace SpecLint.Core.Analysis.Tolerance;
 /// most extreme vertex of each figure (<see cref="CornerSearch"/>). Past
 /// <see cref="ToleranceOptions.MaxVertexParameters"/> loop parameters only the most influential are enumerated.</para>
 /// </remarks>
-public static class ToleranceAnalyzer
+internal static class ToleranceAnalyzer
 {
     /// <summary>Analyses the tolerances of a spec; null when nothing in it varies.</summary>
     /// <param name="spec">The spec.</param>

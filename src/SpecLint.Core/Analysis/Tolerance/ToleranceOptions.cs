@@ -4,7 +4,7 @@ using SpecLint.Core.Units;
 namespace SpecLint.Core.Analysis.Tolerance;
 
 /// <summary>What <see cref="ToleranceAnalyzer.Analyze(Spec.Model.TiaSpec, ToleranceOptions)"/> computes, and how.</summary>
-public sealed record ToleranceOptions
+internal sealed record ToleranceOptions
 {
     /// <summary>Corners only, no Monte Carlo: the cheap setting fix re-checks use.</summary>
     public static ToleranceOptions CornersOnly { get; } = new();

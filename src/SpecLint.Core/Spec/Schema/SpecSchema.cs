@@ -4,7 +4,7 @@ using System.Text.Json.Nodes;
 namespace SpecLint.Core.Spec.Schema;
 
 /// <summary>The JSON Schema (draft-07) of spec files (DESIGN §3), embedded in the library.</summary>
-public static class SpecSchema
+internal static class SpecSchema
 {
     private static readonly Lazy<SchemaValidator> Validator = new(() => new SchemaValidator("spec.schema.json"));
 
