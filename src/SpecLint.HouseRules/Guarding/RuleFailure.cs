@@ -14,7 +14,9 @@ internal static class RuleFailure
         {
             foreach (var frame in new StackTrace(ex, fNeedFileInfo: true).GetFrames())
             {
-                if (frame.GetMethod()?.Module.Assembly == rules && frame.GetFileName() is { Length: > 0 } file && frame.GetFileLineNumber() > 0)
+                // The budget's own frames are SpecLint's instrumentation, not the author's code.
+                if (frame.GetMethod()?.Module.Assembly == rules && frame.GetFileName() is { Length: > 0 } file && frame.GetFileLineNumber() > 0
+                    && !file.EndsWith(Compiling.BudgetRuntime.FileName, StringComparison.Ordinal))
                 {
                     return (file.Replace('\\', '/'), frame.GetFileLineNumber(), Math.Max(1, frame.GetFileColumnNumber()));
                 }
