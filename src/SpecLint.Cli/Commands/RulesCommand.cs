@@ -25,7 +25,7 @@ internal static class RulesCommand
             }
 
             output.WriteLine();
-            output.WriteLine("'speclint explain <id>' prints a rule's page. Configure rules in .speclint.yaml under 'rules:'.");
+            output.WriteLine($"'speclint {WhyCommand.Name} <id>' prints a rule's page. Configure rules in .speclint.yaml under 'rules:'.");
             return 0;
         });
         return command;

@@ -128,7 +128,7 @@ public static class SarifWriter
     private static void WriteRule(Utf8JsonWriter json, RuleDescriptor rule, string? page)
     {
         var helpUri = RuleHelpLinks.For(rule.Id);
-        var full = (page is null ? null : RulePage.WhatItFlags(page)) ?? Sentence(rule.Title);
+        var full = (page is null ? null : RulePage.Condition(page)) ?? Sentence(rule.Title);
         json.WriteStartObject();
         json.WriteString("id", rule.Id);
         json.WriteString("name", PascalName(rule.Id));

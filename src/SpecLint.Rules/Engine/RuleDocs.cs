@@ -2,7 +2,7 @@ using System.Reflection;
 
 namespace SpecLint.Rules.Engine;
 
-/// <summary>The rule pages (rules/&lt;id&gt;/&lt;id&gt;.md), embedded in the library so <c>explain</c> works from an installed tool.</summary>
+/// <summary>The rule pages (rules/&lt;id&gt;/&lt;id&gt;.md), embedded in the library so <c>speclint why</c> works from an installed tool.</summary>
 public static class RuleDocs
 {
     /// <summary>The base of the published help links; a rule's page is <c>{base}/{id}/{id}.md</c>.</summary>
