@@ -67,9 +67,10 @@ public sealed partial class RulePageDesignTests
         {
             var what = m.Groups["what"].Value;
             var text = m.Groups["value"].Value.Trim();
-            var number = double.Parse(NumberPart().Match(text).Value, CultureInfo.InvariantCulture);
-            var decimals = NumberPart().Match(text).Value.Contains('.', StringComparison.Ordinal) ? NumberPart().Match(text).Value.Split('.')[1].Length : 0;
-            var scale = number == 0 ? 1 : QuantityOf(what, text) / number;
+            var digits = NumberPart().Match(text).Value;
+            var decimals = digits.Contains('.', StringComparison.Ordinal) ? digits.Split('.')[1].Length : 0;
+            // The size of one written unit (1 pA, 1 kHz, 1 dB) in SI, so the half-unit tolerance scales with the prefix.
+            var scale = QuantityOf(what, "1" + text[digits.Length..]);
             var halfUnit = 0.5 * Math.Pow(10, -decimals) * scale;
             var actual = what switch
             {
