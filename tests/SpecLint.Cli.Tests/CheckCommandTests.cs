@@ -110,7 +110,7 @@ public sealed class CheckCommandTests
         Assert.True(pm.GetProperty("column").GetInt32() > 0);
         var fix = pm.GetProperty("fix");
         Assert.Equal("/feedback/capacitance", fix.GetProperty("path").GetString());
-        // The fix value must follow the quantity grammar (DESIGN §5).
+        // The fix value must follow the quantity grammar (references.md §D5).
         Assert.True(QuantityParser.Parse(fix.GetProperty("value").GetString()!, Dimension.Capacitance).Typ > 0);
     }
 
