@@ -101,8 +101,9 @@ public sealed class CheckCommandTests
             Assert.True(metrics.TryGetProperty(key, out _), key);
         }
 
-        Assert.True(spec.TryGetProperty("corners", out _));
-        Assert.True(spec.TryGetProperty("monteCarlo", out _));
+        Assert.Equal(JsonValueKind.Object, spec.GetProperty("corners").ValueKind);
+        Assert.True(spec.GetProperty("corners").GetProperty("phaseMarginDegMin").GetDouble() <= metrics.GetProperty("phaseMarginDeg").GetDouble());
+        Assert.InRange(spec.GetProperty("monteCarlo").GetProperty("yield").GetDouble(), 0, 1);
         var pm = spec.GetProperty("findings").EnumerateArray().Single(f => f.GetProperty("rule").GetString() == "phase-margin");
         Assert.Equal("error", pm.GetProperty("severity").GetString());
         Assert.False(pm.GetProperty("waived").GetBoolean());

@@ -80,8 +80,10 @@ internal static class NetlistWriter
 
         sb.AppendLine(".control");
         sb.AppendLine("op");
+        // 12 significant digits: the default 7 would limit the DC comparison to the printed resolution (~1 µV at volts).
+        sb.AppendLine("set numdgt=12");
         sb.AppendLine("print " + string.Join(' ', Enumerable.Range(0, 8).Select(i => $"v(od{i})")));
-        sb.AppendLine($"ac dec 400 {F(acStartHz)} {F(acStopHz)}");
+        sb.AppendLine($"ac dec 4000 {F(acStartHz)} {F(acStopHz)}");
         sb.AppendLine($"wrdata {AcFile} v(oz) v(oxt)");
         sb.AppendLine($"noise v(on) Iinn dec 1000 {F(noiseLowHz)} {F(noiseHighHz)}");
         // ngspice's own total can come out as NaN (seen with the Cf = 0 spike), so the spectrum is written too.
