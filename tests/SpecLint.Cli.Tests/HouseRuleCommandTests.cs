@@ -25,7 +25,7 @@ public sealed class HouseRuleCommandTests
         Assert.Contains("[house rule: house-rules/guard-ring-note/GuardRingNoteRule.cs]", listed.Out, StringComparison.Ordinal);
         Assert.DoesNotContain("guard-ring-note", cli.Run("rules", "--no-house-rules").Out, StringComparison.Ordinal);
 
-        var page = cli.Run("explain", "guard-ring-note");
+        var page = cli.Run("why", "guard-ring-note");
         Assert.StartsWith("# guard-ring-note:", page.Out, StringComparison.Ordinal);
     }
 

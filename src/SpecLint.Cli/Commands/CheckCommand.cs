@@ -11,7 +11,7 @@ internal static class CheckCommand
     public static Command Create()
     {
         var paths = new Argument<string[]>("paths") { Description = "Spec files or folders (default: the repository, per .speclint.yaml)", Arity = ArgumentArity.ZeroOrMore };
-        var format = new Option<string>("--format") { Description = "Terminal output: text, json (DESIGN §5) or github (workflow annotations)", DefaultValueFactory = _ => DefaultFormat() };
+        var format = new Option<string>("--format") { Description = "Terminal output: text, json (metrics and findings for scripts, format version 1) or github (workflow annotations)", DefaultValueFactory = _ => DefaultFormat() };
         format.AcceptOnlyFromAmong("text", "json", "github");
         var report = new Option<string?>("--report") { Description = "Write a Markdown review report to this file (SVG plots in a folder beside it)" };
         var html = new Option<string?>("--html") { Description = "Write the report as one standalone HTML page with the plots inline" };

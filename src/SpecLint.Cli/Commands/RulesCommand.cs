@@ -33,7 +33,7 @@ internal static class RulesCommand
             }
 
             output.WriteLine();
-            output.WriteLine("'speclint explain <id>' prints a rule's page. Configure rules in .speclint.yaml under 'rules:'.");
+            output.WriteLine($"'speclint {WhyCommand.Name} <id>' prints a rule's page. Configure rules in .speclint.yaml under 'rules:'.");
             return problems.Any(p => p.Severity == Severity.Error) ? ExitCodes.UnusableInput : ExitCodes.Clean;
         });
         return command;

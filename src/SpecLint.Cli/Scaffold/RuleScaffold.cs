@@ -1,4 +1,5 @@
 using System.Globalization;
+using SpecLint.Rules.Engine;
 
 namespace SpecLint.Cli.Scaffold;
 
@@ -35,24 +36,43 @@ internal static class RuleScaffold
 
         """;
 
+    /// <summary>The page, in the same sections as the built-in rules' pages, with the cases as its designs.</summary>
     public static string Page(string id) => $"""
         # {id}: feedback resistor at most 100 MΩ
 
         A house rule. Replace the text below with what your team checks and why.
 
-        ## Check
+        {RulePageSections.Line(RulePageSections.Condition)}
 
         `feedback.resistance` ≤ `max` (default 100 MΩ).
 
-        ## Risk on the bench
+        {RulePageSections.Line(RulePageSections.OnTheBench)}
 
         What goes wrong on a real board when this is not met.
 
-        ## Settings
+        {RulePageSections.Line(RulePageSections.FlaggedDesign)}
+
+        ```yaml
+        feedback:
+          resistance: 1 GΩ
+        ```
+
+        {RulePageSections.Line(RulePageSections.RevisedDesign)}
+
+        ```yaml
+        feedback:
+          resistance: 10 MΩ
+        ```
+
+        {RulePageSections.Line(RulePageSections.Settings)}
 
         | key | default | meaning |
         |---|---|---|
         | `max` | 100 MΩ | the largest feedback resistor accepted |
+
+        {RulePageSections.Line(RulePageSections.Sources)}
+
+        - Where the limit comes from (a standard, a handbook, the team's own measurements).
 
         """;
 

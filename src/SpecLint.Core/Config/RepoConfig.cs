@@ -3,7 +3,7 @@ using SpecLint.Core.Spec;
 
 namespace SpecLint.Core.Config;
 
-/// <summary>The repository configuration <c>.speclint.yaml</c> (DESIGN §8), with defaults for what it leaves out.</summary>
+/// <summary>The repository configuration <c>.speclint.yaml</c> (references.md §D8), with defaults for what it leaves out.</summary>
 /// <param name="Path">The file it was read from, or null for the built-in defaults.</param>
 /// <param name="Include">Glob patterns of spec files, relative to the configuration's folder.</param>
 /// <param name="FailOn">Lowest severity that fails the run (never <see cref="ConfigSeverity.Off"/>).</param>

@@ -119,6 +119,11 @@ internal static partial class HouseRuleLoader
             else if (ReadPage(Path.Combine(root, folder, id + ".md")) is { } page)
             {
                 pages[id] = page;
+                var pagePath = Path.Combine(folder, id + ".md").Replace('\\', '/');
+                foreach (var shape in RulePageSections.Problems(id, page))
+                {
+                    problems.Add(new Finding(RuleIds.HouseRuleInvalid, Severity.Warning, display(pagePath), "", 1, 1, $"{id}.md: {shape}"));
+                }
             }
 
             sources[id] = display(declared.Path);

@@ -8,7 +8,7 @@ using SpecLint.Rules.Engine;
 namespace SpecLint.Reporting.Json;
 
 /// <summary>
-/// The machine-readable output of DESIGN §5. Field names are a contract: extend, never rename. Written
+/// The machine-readable output of references.md §D5. Field names are a contract: extend, never rename. Written
 /// with a forward-only writer so key order and number formatting are identical on every run.
 /// </summary>
 internal static class JsonReport

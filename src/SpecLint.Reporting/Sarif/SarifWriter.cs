@@ -128,7 +128,7 @@ internal static class SarifWriter
     private static void WriteRule(Utf8JsonWriter json, RuleDescriptor rule, string? page, string? houseRuleSource)
     {
         var helpUri = houseRuleSource is null ? RuleHelpLinks.For(rule.Id) : null;
-        var full = (page is null ? null : RulePage.WhatItFlags(page)) ?? Sentence(rule.Title);
+        var full = (page is null ? null : RulePage.Condition(page)) ?? Sentence(rule.Title);
         json.WriteStartObject();
         json.WriteString("id", rule.Id);
         json.WriteString("name", PascalName(rule.Id));

@@ -5,7 +5,7 @@ using SpecLint.Rules.Engine;
 namespace SpecLint.Reporting.Terminal;
 
 /// <summary>
-/// The terminal output of DESIGN §6: one line per finding, <c>file:line:col: severity rule-id: message</c>,
+/// The terminal output of references.md §D6: one line per finding, <c>file:line:col: severity rule-id: message</c>,
 /// then a summary. Colour only on a terminal and never when NO_COLOR is set.
 /// </summary>
 internal static class TerminalReport

@@ -21,7 +21,7 @@ internal sealed record CheckRun(
     public IEnumerable<Finding> AllFindings => Specs.SelectMany(s => s.Findings).Concat(RunProblems);
 
     /// <summary>
-    /// DESIGN §5: 2 when any input was unusable (other files were still checked), 1 when an unwaived
+    /// references.md §D5: 2 when any input was unusable (other files were still checked), 1 when an unwaived
     /// finding is at or above the fail level, 0 otherwise.
     /// </summary>
     public int ExitCode

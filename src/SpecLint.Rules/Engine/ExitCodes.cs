@@ -1,6 +1,6 @@
 namespace SpecLint.Rules.Engine;
 
-/// <summary>Process exit codes (DESIGN §5).</summary>
+/// <summary>Process exit codes (references.md §D5).</summary>
 internal static class ExitCodes
 {
     /// <summary>Nothing at or above the fail level.</summary>

@@ -23,7 +23,7 @@ public sealed record Finding(
     bool Waived = false,
     string? WaiverReason = null)
 {
-    /// <summary>The terminal form of DESIGN §6: <c>file:line:col: severity rule-id: message</c>.</summary>
+    /// <summary>The terminal form of references.md §D6: <c>file:line:col: severity rule-id: message</c>.</summary>
     public override string ToString() =>
         $"{File}:{Line}:{Column}: {Severity.Name()} {RuleId}: {Message}{(Waived ? " (waived: " + WaiverReason + ")" : "")}";
 }

@@ -6,13 +6,13 @@ namespace SpecLint.Rules.Engine;
 /// </summary>
 public static class RuleIds
 {
-    /// <summary>A spec file that cannot be read: YAML syntax, schema, units (DESIGN §7).</summary>
+    /// <summary>A spec file that cannot be read: YAML syntax, schema, units (references.md §D7).</summary>
     public const string SpecInvalid = "spec-invalid";
 
     /// <summary>A repository configuration file that cannot be read.</summary>
     public const string ConfigInvalid = "config-invalid";
 
-    /// <summary>A waiver whose expiry date has passed (DESIGN §7).</summary>
+    /// <summary>A waiver whose expiry date has passed (references.md §D7).</summary>
     public const string WaiverExpired = "waiver-expired";
 
     /// <summary>A live waiver that matched no finding: probably stale.</summary>

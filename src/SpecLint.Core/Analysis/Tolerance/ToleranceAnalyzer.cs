@@ -5,7 +5,7 @@ namespace SpecLint.Core.Analysis.Tolerance;
 
 /// <summary>
 /// The spread of a spec's phase margin, bandwidth and peaking over its part tolerances and temperature range
-/// (REFERENCE §1 "Tolerances", §4 items 13–14), and optionally a seeded Monte Carlo yield.
+/// (references.md §1 "Tolerances", §4 items 13–14), and optionally a seeded Monte Carlo yield.
 /// </summary>
 /// <remarks>
 /// <para>Varied: every spread in the spec — Rf, Cf (its own tolerance, IEC 60062 letter codes absolute below

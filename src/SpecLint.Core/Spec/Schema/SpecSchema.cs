@@ -3,7 +3,7 @@ using System.Text.Json.Nodes;
 
 namespace SpecLint.Core.Spec.Schema;
 
-/// <summary>The JSON Schema (draft-07) of spec files (DESIGN §3), embedded in the library.</summary>
+/// <summary>The JSON Schema (draft-07) of spec files (references.md §D3), embedded in the library.</summary>
 internal static class SpecSchema
 {
     private static readonly Lazy<SchemaValidator> Validator = new(() => new SchemaValidator("spec.schema.json"));
