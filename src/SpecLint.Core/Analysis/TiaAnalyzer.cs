@@ -293,9 +293,7 @@ public static class TiaAnalyzer
             throw new ArgumentOutOfRangeException(nameof(options), FormattableString.Invariant($"noise band {fLo} Hz .. {fHi} Hz is empty or not positive"));
         }
 
-        // A second-order peak of Mr dB has Q ≈ 10^(Mr/20) when sharp; that sets the panel width near it.
-        var q = Math.Pow(10, scan.PeakingDb / 20);
-        var v2 = NoiseIntegrator.Integrate(model, fLo, fHi, options.NoisePanelsPerDecade, scan.PeakHz, q);
+        var v2 = NoiseIntegrator.Integrate(model, fLo, fHi, options.NoisePanelsPerDecade);
         var rms = new NoiseRms(
             new Voltage(Math.Sqrt(v2.RfThermal)),
             new Voltage(Math.Sqrt(v2.RshThermal)),

@@ -179,6 +179,27 @@ public sealed class TiaModel
         return (lo, hi);
     }
 
+    /// <summary>
+    /// Coefficients (ascending powers of s, SI) of D(s) = Yf + (Yf + Yin)/A(s), the denominator of Zt and of the
+    /// voltage-noise gain: with 1/A = (a0 + sτt)(1 + sτ2) and Yf + Yin = gs + s·cs,
+    /// D = gf + gs·a0 + s(cf + gs(τt + a0τ2) + cs·a0) + s²(gs·τtτ2 + cs(τt + a0τ2)) + s³·cs·τtτ2.
+    /// </summary>
+    internal double[] DenominatorCoefficients()
+    {
+        var a0 = _invA0;
+        var tt = _invWtSeconds;
+        var t2 = _invWp2Seconds;
+        var gs = _gfSiemens + _gshSiemens;
+        var cs = _cfbFarads + _cinFarads;
+        return
+        [
+            _gfSiemens + (gs * a0),
+            _cfbFarads + (gs * (tt + (a0 * t2))) + (cs * a0),
+            (gs * tt * t2) + (cs * (tt + (a0 * t2))),
+            cs * tt * t2,
+        ];
+    }
+
     /// <summary>1/A(jω) = (1/A0 + jω/ωt)(1 + jω/ωp2).</summary>
     internal Complex InverseA(double w)
     {
