@@ -230,6 +230,29 @@ public sealed class TiaModel
         return 0.5 * Math.Log(yf2 / (ys2 * invA2));
     }
 
+    /// <summary>
+    /// Bounds on d ln|T| / d ln ω over [wLo, wHi]. ln|T| is ½ln(gf² + ω²cf²) minus three terms of the same form
+    /// (Yf + Yin, and the two factors of 1/A); each has slope (ωb)²/(a² + (ωb)²), which rises with ω from 0 to 1.
+    /// So over the interval the slope is at least Yf's term at wLo minus the others at wHi, and at most the reverse.
+    /// </summary>
+    internal (double Min, double Max) LogLoopGainSlopeBounds(double wLo, double wHi)
+    {
+        static double Slope(double w, double a, double b)
+        {
+            var wb = w * b;
+            return wb * wb / ((a * a) + (wb * wb));
+        }
+
+        double Falling(double w) =>
+            Slope(w, _gfSiemens + _gshSiemens, _cfbFarads + _cinFarads)
+            + Slope(w, _invA0, _invWtSeconds)
+            + Slope(w, 1, _invWp2Seconds);
+
+        return (
+            Slope(wLo, _gfSiemens, _cfbFarads) - Falling(wHi),
+            Slope(wHi, _gfSiemens, _cfbFarads) - Falling(wLo));
+    }
+
     internal double LoopGainPhaseRadians(double w) =>
         Math.Atan(w * _cfbFarads / _gfSiemens)
         - Math.Atan(w * (_cfbFarads + _cinFarads) / (_gfSiemens + _gshSiemens))
