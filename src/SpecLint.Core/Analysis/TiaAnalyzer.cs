@@ -149,8 +149,6 @@ public static class TiaAnalyzer
             new Voltage(idle),
             new Voltage(full),
             new Voltage(err),
-            new Voltage(Math.Min(idle, full) - err),
-            new Voltage(Math.Max(idle, full) + err),
             new Voltage(minExact),
             new Voltage(maxExact),
             c.SupplyNegative + c.SwingToNegative,
@@ -283,9 +281,20 @@ public static class TiaAnalyzer
             return Math.Abs(fl) <= Math.Abs(fh) ? lo : hi;
         }
 
-        return Brent.TryFindRoot(f, lo, hi, RootAccuracy, RootIterations, out var root)
-            ? root
-            : Bisection.FindRoot(f, lo, hi, RootAccuracy, RootIterations);
+        if (Brent.TryFindRoot(f, lo, hi, RootAccuracy, RootIterations, out var root))
+        {
+            return root;
+        }
+
+        try
+        {
+            return Bisection.FindRoot(f, lo, hi, RootAccuracy, RootIterations);
+        }
+        catch (MathNet.Numerics.NonConvergenceException e)
+        {
+            throw new AnalysisFailedException(
+                $"the root solver did not converge near {QuantityFormat.FormatRounded(Math.Exp(lo) / (2 * Math.PI), Dimension.Frequency)}", e);
+        }
     }
 
     /// <summary>Golden-section search for the maximum of a unimodal function on [a, b].</summary>
@@ -329,7 +338,10 @@ public static class TiaAnalyzer
         var fHi = options.NoiseBandHigh?.Hertz ?? (10 * (scan.BandwidthHz ?? c.Gbw.Hertz));
         if (!(fLo > 0) || !(fHi > fLo))
         {
-            throw new ArgumentOutOfRangeException(nameof(options), FormattableString.Invariant($"noise band {fLo} Hz .. {fHi} Hz is empty or not positive"));
+            var band = $"{QuantityFormat.FormatRounded(fLo, Dimension.Frequency)} .. {QuantityFormat.FormatRounded(fHi, Dimension.Frequency)}";
+            throw new AnalysisFailedException(isDefault
+                ? $"the default noise band {band} (1 Hz to ten times the bandwidth) is empty; give requirements.noise.band"
+                : $"the noise band {band} is empty");
         }
 
         var v2 = NoiseIntegrator.Integrate(model, fLo, fHi, options.NoisePanelsPerDecade);
