@@ -32,7 +32,7 @@ public sealed class OutputOutsideRailsRule : IRule
 
     /// <summary>Whether an analysis result's output range fits the span.</summary>
     public static bool Fits(OutputRange output, (Voltage Low, Voltage High) span) =>
-        output.MinExact >= span.Low && output.MaxExact <= span.High;
+        output.Min >= span.Low && output.Max <= span.High;
 
     /// <inheritdoc />
     public IEnumerable<Finding> Check(RuleContext context)
@@ -47,19 +47,19 @@ public sealed class OutputOutsideRailsRule : IRule
 
         var spec = context.Spec;
         var problems = new List<string>();
-        if (o.MaxExact > span.High)
+        if (o.Max > span.High)
         {
-            problems.Add($"the output reaches {Fmt.Q(o.MaxExact)}, above the {Fmt.Q(span.High)} limit (positive rail {Fmt.Q(spec.Conditions.SupplyPositive.Min)} at the low end of its tolerance, less {Fmt.Q(spec.Amplifier.SwingToPositive)} swing limit and {Fmt.Q(context.OptionOf<Voltage>(Info, Margin.Key))} margin)");
+            problems.Add($"the output reaches {Fmt.Q(o.Max)}, above the {Fmt.Q(span.High)} limit (positive rail {Fmt.Q(spec.Conditions.SupplyPositive.Min)} at the low end of its tolerance, less {Fmt.Q(spec.Amplifier.SwingToPositive)} swing limit and {Fmt.Q(context.OptionOf<Voltage>(Info, Margin.Key))} margin)");
         }
 
-        if (o.MinExact < span.Low)
+        if (o.Min < span.Low)
         {
-            problems.Add($"the output goes down to {Fmt.Q(o.MinExact)}, below the {Fmt.Q(span.Low)} limit (negative rail {Fmt.Q(spec.Conditions.SupplyNegative.Max)}, plus {Fmt.Q(spec.Amplifier.SwingToNegative)} swing limit and {Fmt.Q(context.OptionOf<Voltage>(Info, Margin.Key))} margin)");
+            problems.Add($"the output goes down to {Fmt.Q(o.Min)}, below the {Fmt.Q(span.Low)} limit (negative rail {Fmt.Q(spec.Conditions.SupplyNegative.Max)}, plus {Fmt.Q(spec.Amplifier.SwingToNegative)} swing limit and {Fmt.Q(context.OptionOf<Voltage>(Info, Margin.Key))} margin)");
         }
 
         var rf = LargestFittingRf(context, span);
         var detail = string.Create(CultureInfo.InvariantCulture,
-            $" Range: {Fmt.Q(o.MinExact)} .. {Fmt.Q(o.MaxExact)} from zero signal to full scale {Fmt.Q(spec.Input.CurrentMax)}, including ±{Fmt.Q(o.ErrorBand)} of offset and bias-current error.");
+            $" Range: {Fmt.Q(o.Min)} .. {Fmt.Q(o.Max)} from zero signal to full scale {Fmt.Q(spec.Input.CurrentMax)}, including ±{Fmt.Q(o.ErrorBand)} of offset and bias-current error.");
         var advice = rf is { } r
             ? $" Use Rf = {SpecEdits.RfText(spec, r)}, the largest standard value that fits (re-checked)."
             : " No standard Rf fits: move the bias voltage, widen the supply or reduce the full-scale current.";

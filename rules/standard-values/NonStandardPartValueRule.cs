@@ -22,22 +22,22 @@ public sealed class NonStandardPartValueRule : IRule
         var spec = context.Spec;
         var rf = spec.Feedback.Resistance;
         var rfSeries = StandardValueSearch.SeriesFor<Resistance>(rf, ESeries.E96);
-        if (!rfSeries.Contains(rf.Typ.Ohms))
+        if (!rfSeries.ContainsWithCoarser(rf.Typ.Ohms))
         {
             var nearest = new Resistance(rfSeries.Nearest(rf.Typ.Ohms));
             yield return context.Report("/feedback/resistance",
-                $"Rf = {rf.Typ} is not an {rfSeries.Name} value (the series {Tolerance(rf, rfSeries)} implies); the nearest is {nearest}.",
+                $"Rf = {rf.Typ} is not a value of {rfSeries.Name} or a coarser series (the series {Tolerance(rf, rfSeries)} implies); the nearest is {nearest}.",
                 new FixSuggestion("/feedback/resistance", SpecEdits.RfText(spec, nearest)));
         }
 
         if (spec.Feedback.Capacitance is { } cf && !IsSubPicofaradStep(cf.Typ))
         {
             var cfSeries = StandardValueSearch.SeriesFor<Capacitance>(cf, ESeries.E12);
-            if (!cfSeries.Contains(cf.Typ.Farads))
+            if (!cfSeries.ContainsWithCoarser(cf.Typ.Farads))
             {
                 var nearest = new Capacitance(cfSeries.Nearest(cf.Typ.Farads));
                 yield return context.Report("/feedback/capacitance",
-                    $"Cf = {cf.Typ} is not an {cfSeries.Name} value (the series {Tolerance(cf, cfSeries)} implies); the nearest is {nearest}.",
+                    $"Cf = {cf.Typ} is not a value of {cfSeries.Name} or a coarser series (the series {Tolerance(cf, cfSeries)} implies); the nearest is {nearest}.",
                     new FixSuggestion("/feedback/capacitance", SpecEdits.CfText(spec, nearest)));
             }
         }

@@ -1,5 +1,6 @@
 using System.Globalization;
 using SpecLint.Core.Analysis;
+using SpecLint.Core.Spec.Model;
 using SpecLint.Core.Units;
 using SpecLint.Rules.Engine;
 using SpecLint.Rules.Fixes;
@@ -39,7 +40,7 @@ public sealed class RfThermalNoiseDominatesRule : IRule
         var found = StandardValueSearch.Find(context, series, needed, upward: true,
             c => SpecEdits.WithRf(spec, new Resistance(c)), edited => OutputOutsideRailsRule.Fits(context.Reanalyze(edited).Analysis.Output, span), steps: 1);
         var message = string.Create(CultureInfo.InvariantCulture,
-            $"Imin·Rf = {Fmt.Q(new Voltage(spec.Input.CurrentMin.Amperes * spec.Feedback.Resistance.Typ.Ohms))} is {ratio:G3}× 2kT/q ({Fmt.Q(twoKtq)} at {hottest.Celsius:0.#} °C): Rf's thermal noise is {1 / ratio:0.#}× the shot noise of the {Fmt.Q(spec.Input.CurrentMin)} minimum signal in power, so the resistor, not the signal, sets the noise floor.");
+            $"Imin·Rf = {Fmt.Q(new Voltage(spec.Input.CurrentMin.Amperes * spec.Feedback.Resistance.Typ.Ohms))} is {Fmt.Ratio(ratio)}× 2kT/q ({Fmt.Q(twoKtq)} at {hottest.Celsius:0.#} °C): Rf's thermal noise is {Fmt.Ratio(1 / ratio)}× the shot noise of the {Fmt.Q(spec.Input.CurrentMin)} minimum signal in power, so the resistor, not the signal, sets the noise floor.");
         if (found is { } rf)
         {
             var r = new Resistance(rf);
@@ -49,8 +50,15 @@ public sealed class RfThermalNoiseDominatesRule : IRule
         }
         else
         {
+            // Say what it would take: the output room the needed Rf asks for, or the signal the room allows.
+            var vbias = spec.Bias.Typ.Volts;
+            var room = spec.Input.Direction == CurrentDirection.OutOfNode ? span.High.Volts - vbias : vbias - span.Low.Volts;
+            var fullScale = Math.Abs(spec.Input.CurrentMax.Amperes) + Math.Abs(spec.Input.DarkCurrent.Typ.Amperes);
+            var takes = room > 0 && fullScale > 0
+                ? $" It would take a full-scale current of at most {Fmt.Q(new Current(room / needed))} instead of {Fmt.Q(spec.Input.CurrentMax)}, {Fmt.Q(new Voltage(fullScale * needed))} of output room instead of {Fmt.Q(new Voltage(room))}, or a minimum signal of at least {Fmt.Q(new Current(minRatio * twoKtq.Volts * fullScale / room))} at the largest Rf that fits ({Fmt.Q(new Resistance(room / fullScale))})."
+                : string.Empty;
             yield return context.Report("/feedback/resistance",
-                message + $" Rf ≥ {Fmt.Q(new Resistance(needed))} would fix it, but no such standard value keeps the full-scale output inside the rails: split the range over two gains, or accept the noise and waive this rule.");
+                message + $" Rf ≥ {Fmt.Q(new Resistance(needed))} would fix it, but no such standard value keeps the full-scale output inside the rails.{takes} Otherwise accept the noise and waive this rule.");
         }
     }
 }

@@ -160,6 +160,20 @@ public sealed class CheckCommandTests
         Assert.Equal(Specs.Clean, File.ReadAllText(spec));
     }
 
+    [Theory]
+    [InlineData("JSON")]
+    [InlineData("Json")]
+    public void Format_is_accepted_in_any_case(string format)
+    {
+        // issue 13 item 8
+        using var cli = new CliHarness();
+        cli.Write("hw/x.tia.yaml", Specs.NoCf);
+        var (exit, output, _) = cli.Run("check", "hw", "--format", format);
+        Assert.Equal(1, exit);
+        using var doc = JsonDocument.Parse(output);
+        Assert.Equal(1, doc.RootElement.GetProperty("version").GetInt32());
+    }
+
     [Fact]
     public void Github_format_prints_workflow_annotations()
     {

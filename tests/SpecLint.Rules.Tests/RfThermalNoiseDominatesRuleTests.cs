@@ -102,6 +102,13 @@ public sealed class RfThermalNoiseDominatesRuleTests
         var f = r.SingleAtMark(Id, Severity.Warning);
         Assert.Null(f.Fix);
         Assert.Contains("no such standard value keeps the full-scale output inside the rails", f.Message, StringComparison.Ordinal);
+        // The channel may already be one gain of several: it says what it would take, not to split the range (issue 13).
+        Assert.DoesNotContain("two gains", f.Message, StringComparison.Ordinal);
+        // Room: 5 V rail less the 100 mV default margin, from a 0 V bias (swing limits 0 V): 4.9 V. Needed Rf = 51.4 MΩ.
+        var needed = Reference.TwoKtOverQ(298.15) / 1e-9;
+        Assert.Contains($"full-scale current of at most {QuantityFormat.FormatRounded(4.9 / needed, Dimension.Current)} instead of 1 µA", f.Message, StringComparison.Ordinal);
+        Assert.Contains($"{QuantityFormat.FormatRounded(1e-6 * needed, Dimension.Voltage)} of output room instead of 4.9 V", f.Message, StringComparison.Ordinal);
+        Assert.Contains($"minimum signal of at least {QuantityFormat.FormatRounded(Reference.TwoKtOverQ(298.15) * 1e-6 / 4.9, Dimension.Current)} at the largest Rf that fits (4.9 MΩ)", f.Message, StringComparison.Ordinal);
         // The ratio Imin·Rf/(2kT/q) = 100 µV/51.4 mV is stated, not rounded away to "0×".
         var ratio = 1e-9 * 100e3 / Reference.TwoKtOverQ(298.15);
         Assert.Contains(string.Create(CultureInfo.InvariantCulture, $"is {ratio:G3}× 2kT/q"), f.Message, StringComparison.Ordinal);

@@ -12,7 +12,17 @@ internal static class CheckCommand
     {
         var paths = new Argument<string[]>("paths") { Description = "Spec files or folders (default: the repository, per .speclint.yaml)", Arity = ArgumentArity.ZeroOrMore };
         var format = new Option<string>("--format") { Description = "Terminal output: text, json (metrics and findings for scripts, format version 1) or github (workflow annotations)", DefaultValueFactory = _ => DefaultFormat() };
-        format.AcceptOnlyFromAmong("text", "json", "github");
+        // Any case is accepted (JSON, Json, json): the value names a format, not a file.
+        string[] formats = ["text", "json", "github"];
+        format.CustomParser = result => result.Tokens.Count == 0 ? DefaultFormat() : result.Tokens[0].Value.ToLowerInvariant();
+        format.Validators.Add(result =>
+        {
+            if (result.Tokens.Count > 0 && !formats.Contains(result.Tokens[0].Value.ToLowerInvariant()))
+            {
+                result.AddError($"--format must be one of {string.Join(", ", formats)}, not '{result.Tokens[0].Value}'");
+            }
+        });
+        format.CompletionSources.Add(formats);
         var report = new Option<string?>("--report") { Description = "Write a Markdown review report to this file (SVG plots in a folder beside it)" };
         var html = new Option<string?>("--html") { Description = "Write the report as one standalone HTML page with the plots inline" };
         var sarif = new Option<string?>("--sarif") { Description = "Write SARIF 2.1.0 for code scanning to this file" };

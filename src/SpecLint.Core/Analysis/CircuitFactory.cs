@@ -8,11 +8,19 @@ public static class CircuitFactory
 {
     /// <summary>
     /// The nominal operating point (references.md §D5): typical values at <see cref="Conditions.Nominal"/>, with the
-    /// offset voltage and bias current at their largest magnitude (see <see cref="TypicalPicker"/>).
+    /// offset voltage and bias current at their largest magnitude (see <see cref="TypicalPicker"/>), the bias
+    /// current moved from 25 °C to the nominal temperature as the corners move it (<see cref="BiasCurrentLaw"/>).
     /// Noise metrics are computed at <see cref="Conditions.Hottest"/> by <see cref="TiaAnalyzer.Analyze(TiaSpec)"/>.
     /// </summary>
     /// <param name="spec">The spec.</param>
-    public static Circuit Nominal(TiaSpec spec) => Create(spec, spec.Conditions.Nominal, TypicalPicker.Instance);
+    public static Circuit Nominal(TiaSpec spec)
+    {
+        ArgumentNullException.ThrowIfNull(spec);
+        var nominal = spec.Conditions.Nominal;
+        var c = Create(spec, nominal, TypicalPicker.Instance);
+        var doubling = spec.Amplifier.BiasCurrentDoubling?.Kelvin ?? BiasCurrentLaw.DefaultDoublingKelvin;
+        return c with { Ib = BiasCurrentLaw.At(c.Ib, nominal, doubling) };
+    }
 
     /// <summary>Builds the operating point with the values <paramref name="picker"/> chooses, at <paramref name="temperature"/>.</summary>
     /// <param name="spec">The spec.</param>

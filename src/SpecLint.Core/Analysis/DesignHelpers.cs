@@ -55,10 +55,11 @@ public static class DesignHelpers
 
     /// <summary>
     /// The largest Rf for which the DC output, from zero signal to full scale with the offset and bias-current
-    /// errors at their worst signs (references.md §1 row 12, ideal form), stays <paramref name="margin"/> inside the
-    /// op-amp's swing limits. Closed form: each limit is linear in Rf.
+    /// errors at their worst signs, stays <paramref name="margin"/> inside the op-amp's swing limits, on the exact
+    /// finite-A0 solution the output range uses (<see cref="TiaAnalyzer.ExactDcOutput"/>). Closed form: that
+    /// solution is vo = (vp + Rf·k)/(1 + 1/A0 + Rf/(Rsh·A0)) with k = Vos/Rsh + Ib + I, so each limit is linear in Rf.
     /// </summary>
-    /// <param name="circuit">The operating point (its rails, swing, currents, Vos, Ib, Rsh; Rf is ignored).</param>
+    /// <param name="circuit">The operating point (its rails, swing, currents, Vos, Ib, Rsh, A0; Rf is ignored).</param>
     /// <param name="margin">Extra room to keep from each swing limit.</param>
     /// <returns>Null when even Rf → 0 does not fit; +∞ when nothing limits Rf.</returns>
     public static Resistance? LargestRfForHeadroom(Circuit circuit, Voltage margin)
@@ -67,20 +68,28 @@ public static class DesignHelpers
         var high = circuit.SupplyPositive.Volts - circuit.SwingToPositive.Volts - margin.Volts;
         var low = circuit.SupplyNegative.Volts + circuit.SwingToNegative.Volts + margin.Volts;
         var pol = circuit.Polarity;
-        var idle = pol * circuit.Idark.Amperes;
-        var full = pol * (circuit.Imax.Amperes + circuit.Idark.Amperes);
         var vos = Math.Abs(circuit.Vos.Volts);
+        var ib = Math.Abs(circuit.Ib.Amperes);
         var gsh = circuit.Rsh is { } rsh ? 1 / rsh.Ohms : 0;
-        // Error per ohm of Rf: Vos·(Rf/Rsh) + Ib·Rf; the |Vos| itself does not scale.
-        var errSlope = (vos * gsh) + Math.Abs(circuit.Ib.Amperes);
-        var vb = circuit.Vbias.Volts;
+        var invA0 = 1 / circuit.A0.Linear;
 
         var limit = double.PositiveInfinity;
-        // Upper side: vb + vos + (max current + errSlope)·Rf ≤ high; lower side: vb − vos + (min current − errSlope)·Rf ≥ low.
-        if (!Bound(vb + vos, Math.Max(idle, full) + errSlope, high, ref limit) ||
-            !Bound(-(vb - vos), -(Math.Min(idle, full) - errSlope), -low, ref limit))
+        foreach (var i in (ReadOnlySpan<double>)[pol * circuit.Idark.Amperes, pol * (circuit.Imax.Amperes + circuit.Idark.Amperes)])
         {
-            return null;
+            for (var sv = -1; sv <= 1; sv += 2)
+            {
+                for (var sb = -1; sb <= 1; sb += 2)
+                {
+                    var vp = circuit.Vbias.Volts + (sv * vos);
+                    var k = (sv * vos * gsh) + (sb * ib) + i;
+                    // vo ≤ high ⇔ vp + Rf·(k − high·gsh/A0) ≤ high·(1 + 1/A0); vo ≥ low likewise with signs flipped.
+                    if (!Bound(vp, k - (high * gsh * invA0), high * (1 + invA0), ref limit) ||
+                        !Bound(-vp, (low * gsh * invA0) - k, -low * (1 + invA0), ref limit))
+                    {
+                        return null;
+                    }
+                }
+            }
         }
 
         return new Resistance(limit);

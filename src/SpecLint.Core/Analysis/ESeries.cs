@@ -130,6 +130,30 @@ public sealed class ESeries
     /// <param name="value">A positive value.</param>
     public double NextDown(double value) => Snap(value, up: false, strict: true);
 
+    /// <summary>
+    /// Whether a part of this series' tolerance can have <paramref name="value"/>: a value of this series or of
+    /// any coarser one. Tight-tolerance parts are also sold in the coarser values (a 1 % resistor comes in
+    /// 4.7 kΩ as well as 4.75 kΩ; common practice), and E24 is not a subset of E96.
+    /// </summary>
+    /// <param name="value">A positive value.</param>
+    public bool ContainsWithCoarser(double value)
+    {
+        foreach (var series in All)
+        {
+            if (series.Contains(value))
+            {
+                return true;
+            }
+
+            if (ReferenceEquals(series, this))
+            {
+                break;
+            }
+        }
+
+        return Contains(value);
+    }
+
     /// <summary>Whether <paramref name="value"/> is a series value in any decade, to a relative 1e-9.</summary>
     /// <param name="value">A positive value.</param>
     public bool Contains(double value)

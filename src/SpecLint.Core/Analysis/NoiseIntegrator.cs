@@ -4,8 +4,8 @@ namespace SpecLint.Core.Analysis;
 
 /// <summary>
 /// Integrates the output noise PSD over a band, in u = ln f (∫S df = ∫S·f du), with Gauss–Legendre
-/// panels of equal width in u. A log variable makes every decade cost the same and keeps a resonance,
-/// whose width in u is about 1/Q, covered by the same number of nodes wherever it sits.
+/// panels in u. A log variable makes every decade cost the same and keeps a resonance, whose width in u is
+/// about 1/Q, covered by the same number of nodes wherever it sits.
 /// </summary>
 internal static class NoiseIntegrator
 {
@@ -22,29 +22,39 @@ internal static class NoiseIntegrator
         Weights = rule.Weights;
     }
 
+    // Panel width near a resonance: at least a quarter of its half-width, and a quarter of the distance to it,
+    // so a Lorentzian tail looks smooth on every panel however high the Q (its nearest singularity is then
+    // four panel widths away, where 8-node Gauss–Legendre is exact to rounding).
+    private const double NearFraction = 0.25;
+
     /// <summary>
-    /// Integrates each source's output PSD over [fLo, fHi]; returns V² per source. With a resonance at
-    /// <paramref name="peakHz"/> of quality <paramref name="q"/> (width ≈ 1/Q in ln f), the panels within ±10/Q
-    /// of it are narrowed to 0.25/Q so the peak gets the same relative resolution whatever its Q.
+    /// Integrates each source's output PSD over [fLo, fHi]; returns V² per source. Panels are at most
+    /// 1/<paramref name="panelsPerDecade"/> decade wide and are graded down towards every resonance of the
+    /// noise transfers (the complex closed-loop poles, <see cref="ClosedLoopPoles"/>), whether it shows in |Zt|
+    /// or only in the voltage-noise gain.
     /// </summary>
-    public static NoiseDensities Integrate(TiaModel model, double fLoHz, double fHiHz, int panelsPerDecade, double? peakHz, double q)
+    public static NoiseDensities Integrate(TiaModel model, double fLoHz, double fHiHz, int panelsPerDecade)
     {
         var uLo = Math.Log(fLoHz);
         var uHi = Math.Log(fHiHz);
         var coarse = Math.Log(10) / panelsPerDecade;
+        var resonances = ClosedLoopPoles.Resonances(model);
         var sums = new Sums();
-        if (peakHz is { } fp && q > 1 && 0.25 / q < coarse)
+        var u = uLo;
+        while (u < uHi)
         {
-            var up = Math.Log(fp);
-            var a = Math.Clamp(up - (10 / q), uLo, uHi);
-            var b = Math.Clamp(up + (10 / q), uLo, uHi);
-            Panels(model, uLo, a, coarse, ref sums);
-            Panels(model, a, b, 0.25 / q, ref sums);
-            Panels(model, b, uHi, coarse, ref sums);
-        }
-        else
-        {
-            Panels(model, uLo, uHi, coarse, ref sums);
+            var next = Math.Min(uHi, u + PanelWidth(u, coarse, resonances));
+            // A panel ends on a resonance centre rather than straddling it.
+            foreach (var (centre, _) in resonances)
+            {
+                if (centre > u && centre < next)
+                {
+                    next = centre;
+                }
+            }
+
+            Panels(model, u, next, next - u, ref sums);
+            u = next;
         }
 
         return new NoiseDensities(
@@ -53,6 +63,17 @@ internal static class NoiseIntegrator
             model.ShotPsd * sums.Zt,
             model.CurrentNoisePsd * (sums.Zt + (model.CurrentNoiseCornerHz * sums.ZtOverF)),
             model.VoltageNoisePsd * (sums.Ng + (model.VoltageNoiseCornerHz * sums.NgOverF)));
+    }
+
+    private static double PanelWidth(double u, double coarse, IReadOnlyList<(double CentreU, double HalfWidthU)> resonances)
+    {
+        var width = coarse;
+        foreach (var (centre, halfWidth) in resonances)
+        {
+            width = Math.Min(width, Math.Max(NearFraction * halfWidth, NearFraction * Math.Abs(u - centre)));
+        }
+
+        return width;
     }
 
     /// <summary>Equal Gauss–Legendre panels no wider than <paramref name="maxWidth"/> over [a, b] in ln f.</summary>

@@ -11,6 +11,8 @@ namespace SpecLint.Core.Analysis;
 /// <remarks>
 /// Method: a log-spaced scan over 10⁻³·(lowest) .. 10³·(highest) characteristic frequency brackets every
 /// |T| = 1 crossing and the −3 dB fall, and MathNet's Brent solver refines each bracket to 1e-12 in ln f.
+/// Between scan points, bounds on how fast |T| can change decide where a pair of crossings could hide, and
+/// only there is the interval split further, so no crossing slips between points.
 /// The phase comes from summed pole and zero angles, so it is unwrapped from DC by construction (docs/references.md
 /// §4 item 3). The peak is refined by golden-section search around the largest scan sample.
 /// </remarks>
@@ -19,6 +21,9 @@ public static class TiaAnalyzer
     private const double RootAccuracy = 1e-12;
     private const int RootIterations = 200;
     private const double ScanMargin = 1e3;
+
+    // Width in ln ω below which the crossing search stops splitting: crossings closer than this are one tangency.
+    private const double CrossingResolution = 1e-9;
 
     /// <summary>
     /// Nominal analysis of a spec (references.md §D5): small-signal and DC figures at the nominal temperature, noise
@@ -144,8 +149,6 @@ public static class TiaAnalyzer
             new Voltage(idle),
             new Voltage(full),
             new Voltage(err),
-            new Voltage(Math.Min(idle, full) - err),
-            new Voltage(Math.Max(idle, full) + err),
             new Voltage(minExact),
             new Voltage(maxExact),
             c.SupplyNegative + c.SwingToNegative,
@@ -182,14 +185,10 @@ public static class TiaAnalyzer
             // Recomputed, not multiplied up, so a bracket's ends are exactly the points the scan judged.
             w = Math.Exp(uLo + (i * du));
             var t = model.LogLoopGainMagnitude(w);
-            if ((prevT > 0) != (t > 0))
+            // ln|T| moves at most 3 per unit of ln ω, so values this far from 0 at both ends rule out a crossing.
+            if ((prevT > 0) != (t > 0) || Math.Abs(prevT) + Math.Abs(t) <= 3 * du)
             {
-                var u = Refine(u => model.LogLoopGainMagnitude(Math.Exp(u)), uLo + ((i - 1) * du), uLo + (i * du));
-                var wc = Math.Exp(u);
-                crossings.Add(new LoopCrossing(
-                    new Frequency(wc / (2 * Math.PI)),
-                    t > 0 ? CrossingDirection.Rising : CrossingDirection.Falling,
-                    new Angle(model.LoopGainPhaseRadians(wc))));
+                FindCrossings(model, uLo + ((i - 1) * du), prevT, uLo + (i * du), t, crossings);
             }
 
             var z = Math.Log(model.TransimpedanceMagnitudeSquared(w));
@@ -232,6 +231,44 @@ public static class TiaAnalyzer
     }
 
     /// <summary>
+    /// Every |T| = 1 crossing in [a, b] (u = ln ω), in order. Bisects until the slope bounds of ln|T|
+    /// (<see cref="TiaModel.LogLoopGainSlopeBounds"/>) prove a part monotonic (then a sign change there is exactly
+    /// one crossing) or prove it cannot reach 0 from its end values; so no pair of crossings can hide between
+    /// scan points, however close. Below <see cref="CrossingResolution"/> in ln ω a part counts as one point.
+    /// </summary>
+    private static void FindCrossings(TiaModel model, double a, double ga, double b, double gb, ImmutableArray<LoopCrossing>.Builder crossings)
+    {
+        var (min, max) = model.LogLoopGainSlopeBounds(Math.Exp(a), Math.Exp(b));
+        var changes = (ga > 0) != (gb > 0);
+        var monotonic = min > 0 || max < 0;
+        if (monotonic || b - a < CrossingResolution)
+        {
+            if (changes)
+            {
+                var u = Refine(u => model.LogLoopGainMagnitude(Math.Exp(u)), a, b);
+                var wc = Math.Exp(u);
+                crossings.Add(new LoopCrossing(
+                    new Frequency(wc / (2 * Math.PI)),
+                    gb > 0 ? CrossingDirection.Rising : CrossingDirection.Falling,
+                    new Angle(model.LoopGainPhaseRadians(wc))));
+            }
+
+            return;
+        }
+
+        // Same sign at both ends: reaching 0 and coming back needs |ga|/rate + |gb|/rate of room.
+        if (!changes && ((ga > 0 ? (ga / -min) + (gb / max) : (-ga / max) + (-gb / -min)) > b - a))
+        {
+            return;
+        }
+
+        var m = (a + b) / 2;
+        var gm = model.LogLoopGainMagnitude(Math.Exp(m));
+        FindCrossings(model, a, ga, m, gm, crossings);
+        FindCrossings(model, m, gm, b, gb, crossings);
+    }
+
+    /// <summary>
     /// Brent's method on a bracket from the scan. A scan point can land on the root itself, where rounding
     /// may give both ends the same sign; the end nearer zero is then the root to working precision.
     /// </summary>
@@ -244,9 +281,20 @@ public static class TiaAnalyzer
             return Math.Abs(fl) <= Math.Abs(fh) ? lo : hi;
         }
 
-        return Brent.TryFindRoot(f, lo, hi, RootAccuracy, RootIterations, out var root)
-            ? root
-            : Bisection.FindRoot(f, lo, hi, RootAccuracy, RootIterations);
+        if (Brent.TryFindRoot(f, lo, hi, RootAccuracy, RootIterations, out var root))
+        {
+            return root;
+        }
+
+        try
+        {
+            return Bisection.FindRoot(f, lo, hi, RootAccuracy, RootIterations);
+        }
+        catch (MathNet.Numerics.NonConvergenceException e)
+        {
+            throw new AnalysisFailedException(
+                $"the root solver did not converge near {QuantityFormat.FormatRounded(Math.Exp(lo) / (2 * Math.PI), Dimension.Frequency)}", e);
+        }
     }
 
     /// <summary>Golden-section search for the maximum of a unimodal function on [a, b].</summary>
@@ -290,12 +338,13 @@ public static class TiaAnalyzer
         var fHi = options.NoiseBandHigh?.Hertz ?? (10 * (scan.BandwidthHz ?? c.Gbw.Hertz));
         if (!(fLo > 0) || !(fHi > fLo))
         {
-            throw new ArgumentOutOfRangeException(nameof(options), FormattableString.Invariant($"noise band {fLo} Hz .. {fHi} Hz is empty or not positive"));
+            var band = $"{QuantityFormat.FormatRounded(fLo, Dimension.Frequency)} .. {QuantityFormat.FormatRounded(fHi, Dimension.Frequency)}";
+            throw new AnalysisFailedException(isDefault
+                ? $"the default noise band {band} (1 Hz to ten times the bandwidth) is empty; give requirements.noise.band"
+                : $"the noise band {band} is empty");
         }
 
-        // A second-order peak of Mr dB has Q ≈ 10^(Mr/20) when sharp; that sets the panel width near it.
-        var q = Math.Pow(10, scan.PeakingDb / 20);
-        var v2 = NoiseIntegrator.Integrate(model, fLo, fHi, options.NoisePanelsPerDecade, scan.PeakHz, q);
+        var v2 = NoiseIntegrator.Integrate(model, fLo, fHi, options.NoisePanelsPerDecade);
         var rms = new NoiseRms(
             new Voltage(Math.Sqrt(v2.RfThermal)),
             new Voltage(Math.Sqrt(v2.RshThermal)),

@@ -179,6 +179,27 @@ public sealed class TiaModel
         return (lo, hi);
     }
 
+    /// <summary>
+    /// Coefficients (ascending powers of s, SI) of D(s) = Yf + (Yf + Yin)/A(s), the denominator of Zt and of the
+    /// voltage-noise gain: with 1/A = (a0 + sτt)(1 + sτ2) and Yf + Yin = gs + s·cs,
+    /// D = gf + gs·a0 + s(cf + gs(τt + a0τ2) + cs·a0) + s²(gs·τtτ2 + cs(τt + a0τ2)) + s³·cs·τtτ2.
+    /// </summary>
+    internal double[] DenominatorCoefficients()
+    {
+        var a0 = _invA0;
+        var tt = _invWtSeconds;
+        var t2 = _invWp2Seconds;
+        var gs = _gfSiemens + _gshSiemens;
+        var cs = _cfbFarads + _cinFarads;
+        return
+        [
+            _gfSiemens + (gs * a0),
+            _cfbFarads + (gs * (tt + (a0 * t2))) + (cs * a0),
+            (gs * tt * t2) + (cs * (tt + (a0 * t2))),
+            cs * tt * t2,
+        ];
+    }
+
     /// <summary>1/A(jω) = (1/A0 + jω/ωt)(1 + jω/ωp2).</summary>
     internal Complex InverseA(double w)
     {
@@ -207,6 +228,29 @@ public sealed class TiaModel
         var wcs = w * (_cfbFarads + _cinFarads);
         var ys2 = (gs * gs) + (wcs * wcs);
         return 0.5 * Math.Log(yf2 / (ys2 * invA2));
+    }
+
+    /// <summary>
+    /// Bounds on d ln|T| / d ln ω over [wLo, wHi]. ln|T| is ½ln(gf² + ω²cf²) minus three terms of the same form
+    /// (Yf + Yin, and the two factors of 1/A); each has slope (ωb)²/(a² + (ωb)²), which rises with ω from 0 to 1.
+    /// So over the interval the slope is at least Yf's term at wLo minus the others at wHi, and at most the reverse.
+    /// </summary>
+    internal (double Min, double Max) LogLoopGainSlopeBounds(double wLo, double wHi)
+    {
+        static double Slope(double w, double a, double b)
+        {
+            var wb = w * b;
+            return wb * wb / ((a * a) + (wb * wb));
+        }
+
+        double Falling(double w) =>
+            Slope(w, _gfSiemens + _gshSiemens, _cfbFarads + _cinFarads)
+            + Slope(w, _invA0, _invWtSeconds)
+            + Slope(w, 1, _invWp2Seconds);
+
+        return (
+            Slope(wLo, _gfSiemens, _cfbFarads) - Falling(wHi),
+            Slope(wHi, _gfSiemens, _cfbFarads) - Falling(wLo));
     }
 
     internal double LoopGainPhaseRadians(double w) =>

@@ -92,7 +92,7 @@ internal sealed class MarkdownReport
             var pm = a is null ? "–" : a.PhaseMargin is { } p ? MetricRows.Deg(p.Degrees) + Worst(s) : "undefined";
             var bw = a?.Bandwidth is { } b ? MetricRows.Q(b.Hertz, Core.Units.Dimension.Frequency) : "–";
             var noise = a?.Noise is { } n ? MetricRows.Q(n.InputRms.Amperes, Core.Units.Dimension.Current) : "–";
-            var range = a is null ? "–" : $"{MetricRows.Q(a.Output.MinExact.Volts, Core.Units.Dimension.Voltage)} .. {MetricRows.Q(a.Output.MaxExact.Volts, Core.Units.Dimension.Voltage)}";
+            var range = a is null ? "–" : $"{MetricRows.Q(a.Output.Min.Volts, Core.Units.Dimension.Voltage)} .. {MetricRows.Q(a.Output.Max.Volts, Core.Units.Dimension.Voltage)}";
             var counts = Counts(s);
             Line($"| [{MarkdownText.Cell(s.Name)}]({MarkdownText.Target(Rel(s.File))}) | {result} | {pm} | {bw} | {noise} | {range} | {counts} |");
         }

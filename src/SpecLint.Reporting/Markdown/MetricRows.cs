@@ -17,7 +17,7 @@ internal static class MetricRows
         yield return ("Peaking", string.Create(CultureInfo.InvariantCulture, $"{a.PeakingDb:0.00} dB"), a.PeakFrequency is { } pf ? "at " + Q(pf.Hertz, Dimension.Frequency) : "no peak above DC");
         yield return ("High-frequency noise gain", double.IsFinite(a.NoiseGainHighFrequency) ? string.Create(CultureInfo.InvariantCulture, $"{a.NoiseGainHighFrequency:0.##}") : "unbounded", string.Create(CultureInfo.InvariantCulture, $"1 + Cin/(Cf + Cpar); Cin = {Q(c.Cin.Farads, Dimension.Capacitance)}, Cf + Cpar = {Q(c.FeedbackCapacitance.Farads, Dimension.Capacitance)}"));
         yield return ("β zero / pole", $"{(a.BetaZero is { } z ? Q(z.Hertz, Dimension.Frequency) : "none")} / {(a.BetaPole is { } p ? Q(p.Hertz, Dimension.Frequency) : "none")}", "feedback-factor corner frequencies");
-        yield return ("Output range", $"{Q(a.Output.MinExact.Volts, Dimension.Voltage)} .. {Q(a.Output.MaxExact.Volts, Dimension.Voltage)}", $"zero signal to full scale, ±{Q(a.Output.ErrorBand.Volts, Dimension.Voltage)} DC error included");
+        yield return ("Output range", $"{Q(a.Output.Min.Volts, Dimension.Voltage)} .. {Q(a.Output.Max.Volts, Dimension.Voltage)}", $"zero signal to full scale, ±{Q(a.Output.ErrorBand.Volts, Dimension.Voltage)} DC error included");
         yield return ("Headroom", $"{Q(a.Output.HeadroomLow.Volts, Dimension.Voltage)} / {Q(a.Output.HeadroomHigh.Volts, Dimension.Voltage)}", "to the low / high swing limit at nominal supply");
         yield return ("Imin·Rf / (2kT/q)", string.Create(CultureInfo.InvariantCulture, $"{a.ShotToRfThermalRatio:0.###}"), "≥ 1: the signal's shot noise exceeds Rf's thermal noise");
         if (a.Noise is { } n)

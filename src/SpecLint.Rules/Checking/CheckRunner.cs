@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using SpecLint.Core.Analysis;
 using SpecLint.Core.Analysis.Tolerance;
 using SpecLint.Core.Config;
 using SpecLint.Core.Spec;
@@ -93,18 +94,20 @@ internal static class CheckRunner
         tolerances ??= StandardTolerances.Analyze;
         var analyzer = new DefaultSpecAnalyzer((s, mc) => options.Tolerances ? tolerances(s, config, mc) : null);
         SpecAnalysis analysis;
+        IReadOnlyList<Finding> findings;
         try
         {
             analysis = analyzer.Analyze(spec, includeNoise: true, includeCorners: true, monteCarlo: true);
+            // Fix searches re-run the analysis on candidate values, which can fail the same way.
+            findings = new RuleRunner(options.Catalog, config, analyzer).Run(analysis);
         }
-        catch (ArithmeticException e)
+        catch (Exception e) when (AnalysisFailedException.IsNumericalFailure(e))
         {
             var at = spec.Locations.Locate("");
             return new SpecOutcome(spec.File, spec, null, null, null,
-                [new Finding(RuleIds.AnalysisFailed, Severity.Error, spec.File, "", at.Line, at.Column, $"the analysis did not converge ({e.Message}); check the values for a typo in a prefix")]);
+                [new Finding(RuleIds.AnalysisFailed, Severity.Error, spec.File, "", at.Line, at.Column, $"the analysis failed: {e.Message}; check the values for a typo in a prefix")]);
         }
 
-        var findings = new RuleRunner(options.Catalog, config, analyzer).Run(analysis);
         var all = WaiverApplication.Apply(spec, findings, options.Today, options.Catalog.KnownIds)
             .OrderBy(f => f.Line).ThenBy(f => f.Column).ThenBy(f => f.RuleId, StringComparer.Ordinal).ThenBy(f => f.Message, StringComparer.Ordinal)
             .ToImmutableArray();

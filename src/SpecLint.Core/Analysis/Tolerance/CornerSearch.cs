@@ -9,8 +9,9 @@ namespace SpecLint.Core.Analysis.Tolerance;
 /// </summary>
 /// <remarks>
 /// The inner search moves one axis at a time: it samples the axis at <see cref="GridSteps"/> + 1 evenly spaced
-/// points, and when an inner point beats the current one, refines it by golden-section search between its grid
-/// neighbours; sweeps repeat until no axis moves (at most <see cref="MaxSweeps"/>). This finds maxima that are
+/// points and refines the best of them, an end of the axis included, by golden-section search between its grid
+/// neighbours; after each sweep a line search follows the sweep's net move through several axes at once (a
+/// pattern move), and sweeps repeat until no axis moves (at most <see cref="MaxSweeps"/>). This finds maxima that are
 /// unimodal along each axis, such as phase margin against GBW with a fixed second pole; it is not a global
 /// optimiser for arbitrary surfaces.
 /// </remarks>
@@ -138,35 +139,41 @@ internal sealed class CornerSearch
         var (m, s) = (startMetrics, startScore);
         for (var sweep = 0; sweep < MaxSweeps; sweep++)
         {
+            var sweepStart = (double[])x.Clone();
             var moved = false;
             foreach (var i in axes)
             {
                 var a = _box.Axes[i];
                 var bestT = double.NaN;
-                var bestK = -1;
                 var bestS = s;
                 var bestM = m;
+                var gridK = 0;
+                var gridS = double.NegativeInfinity;
                 for (var k = 0; k <= GridSteps; k++)
                 {
                     var t = (double)k / GridSteps;
                     var (mk, sk) = Probe(e, x, i, a.At(t));
+                    if (sk > gridS)
+                    {
+                        (gridK, gridS) = (k, sk);
+                    }
+
                     if (sk > bestS)
                     {
-                        (bestT, bestK, bestS, bestM) = (t, k, sk, mk);
+                        (bestT, bestS, bestM) = (t, sk, mk);
                     }
                 }
 
-                if (bestK > 0 && bestK < GridSteps)
+                // Refine between the best grid point's neighbours, also when it is an end of the axis (the vertex the
+                // climb may have started from): a maximum can lie between a vertex and the next grid point.
+                var (gt, gm, gs) = Golden(e, x, i, (double)Math.Max(0, gridK - 1) / GridSteps, (double)Math.Min(GridSteps, gridK + 1) / GridSteps);
+                if (gs > bestS)
                 {
-                    var (t, mt, st) = Golden(e, x, i, (double)(bestK - 1) / GridSteps, (double)(bestK + 1) / GridSteps);
-                    if (st > bestS)
-                    {
-                        (bestT, bestS, bestM) = (t, st, mt);
-                    }
+                    (bestT, bestS, bestM) = (gt, gs, gm);
                 }
 
                 // A relative threshold keeps rounding noise from counting as progress and looping.
-                if (bestK >= 0 && bestS > s + (1e-12 * Math.Max(1, Math.Abs(s))))
+                if (!double.IsNaN(bestT) && bestS > s + (1e-12 * Math.Max(1, Math.Abs(s))))
                 {
                     x[i] = a.At(bestT);
                     (m, s) = (bestM, bestS);
@@ -178,9 +185,78 @@ internal sealed class CornerSearch
             {
                 break;
             }
+
+            // A ridge across the axes is climbed in the direction the whole sweep moved, not axis by axis.
+            (x, m, s) = PatternMove(e, sweepStart, x, m, s, axes);
         }
 
         return (x, m);
+    }
+
+    /// <summary>
+    /// Golden-section search along the sweep's net move, from its end to the edge of the box (at most as far
+    /// again); returns the better of that and the sweep's end.
+    /// </summary>
+    private (double[] X, LoopMetrics Metrics, double Score) PatternMove(Extreme e, double[] from, double[] to, LoopMetrics m, double s, int[] axes)
+    {
+        var reach = 1.0;
+        foreach (var i in axes)
+        {
+            var d = to[i] - from[i];
+            var a = _box.Axes[i];
+            if (d != 0)
+            {
+                reach = Math.Min(reach, ((d > 0 ? a.High : a.Low) - to[i]) / d);
+            }
+        }
+
+        if (!(reach > 1e-9))
+        {
+            return (to, m, s);
+        }
+
+        double[] At(double lambda)
+        {
+            var p = (double[])to.Clone();
+            foreach (var i in axes)
+            {
+                var a = _box.Axes[i];
+                p[i] = Math.Clamp(to[i] + (lambda * (to[i] - from[i])), Math.Min(a.Low, a.High), Math.Max(a.Low, a.High));
+            }
+
+            return p;
+        }
+
+        (LoopMetrics M, double S) Eval(double lambda)
+        {
+            var mm = Evaluate(At(lambda));
+            return (mm, Score(e, mm));
+        }
+
+        var invPhi = (Math.Sqrt(5) - 1) / 2;
+        var (lo, hi) = (0.0, reach);
+        var c = hi - (invPhi * (hi - lo));
+        var dd = lo + (invPhi * (hi - lo));
+        var (mc, sc) = Eval(c);
+        var (md, sd) = Eval(dd);
+        for (var k = 0; k < GoldenIterations; k++)
+        {
+            if (sc > sd)
+            {
+                (hi, dd, md, sd) = (dd, c, mc, sc);
+                c = hi - (invPhi * (hi - lo));
+                (mc, sc) = Eval(c);
+            }
+            else
+            {
+                (lo, c, mc, sc) = (c, dd, md, sd);
+                dd = lo + (invPhi * (hi - lo));
+                (md, sd) = Eval(dd);
+            }
+        }
+
+        var (lambdaBest, mBest, sBest) = sc > sd ? (c, mc, sc) : (dd, md, sd);
+        return sBest > s + (1e-12 * Math.Max(1, Math.Abs(s))) ? (At(lambdaBest), mBest, sBest) : (to, m, s);
     }
 
     private (LoopMetrics Metrics, double Score) Probe(Extreme e, double[] x, int axis, double value)

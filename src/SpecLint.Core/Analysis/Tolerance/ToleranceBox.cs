@@ -12,7 +12,6 @@ namespace SpecLint.Core.Analysis.Tolerance;
 /// </summary>
 internal sealed class ToleranceBox
 {
-    private const double ReferenceCelsius = 25;
 
     private readonly Circuit _typical;
     private readonly double _ibAt25;
@@ -169,10 +168,7 @@ internal sealed class ToleranceBox
         return x;
     }
 
-    private double IbAt(double kelvin) =>
-        double.IsPositiveInfinity(_doublingKelvin) || _doublingKelvin <= 0
-            ? _ibAt25
-            : _ibAt25 * Math.Pow(2, (kelvin - Temperature.ZeroCelsiusInKelvin - ReferenceCelsius) / _doublingKelvin);
+    private double IbAt(double kelvin) => BiasCurrentLaw.At(new Current(_ibAt25), new Temperature(kelvin), _doublingKelvin).Amperes;
 
     // The shortest round-trip text can print 40 °C as "4E+01 °C"; tables want plain figures.
     private static string Celsius(Temperature t) => QuantityFormat.FormatRounded(t.Kelvin, Dimension.Temperature, 4);

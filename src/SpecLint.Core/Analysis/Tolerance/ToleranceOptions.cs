@@ -27,7 +27,7 @@ internal sealed record ToleranceOptions
     /// usual figure for FET inputs, common practice). The spec's bias current is taken at 25 °C. Use
     /// <see cref="double.PositiveInfinity"/> for a bipolar input whose bias current barely moves.
     /// </summary>
-    public double BiasCurrentDoublingKelvin { get; init; } = 10;
+    public double BiasCurrentDoublingKelvin { get; init; } = BiasCurrentLaw.DefaultDoublingKelvin;
 
     /// <summary>
     /// The most parameters whose 2ⁿ vertices are all evaluated (default 12, i.e. 4096 vertices). With more,
