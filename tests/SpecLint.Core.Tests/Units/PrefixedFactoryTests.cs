@@ -2,7 +2,7 @@ using SpecLint.Core.Units;
 
 namespace SpecLint.Core.Tests.Units;
 
-public class PrefixedFactoryTests
+public sealed class PrefixedFactoryTests
 {
     [Fact]
     public void Prefixed_factories_and_accessors_round_trip_through_SI()
