@@ -12,6 +12,9 @@ public readonly record struct Angle(double Radians) : IQuantity<Angle>
     /// <summary>Builds an angle from degrees.</summary>
     public static Angle FromDegrees(double degrees) => new(degrees * Math.PI / 180);
 
+    /// <summary>Builds an angle from radians.</summary>
+    public static Angle FromRadians(double radians) => new(radians);
+
     /// <inheritdoc />
     public double Si => Radians;
 

@@ -12,6 +12,21 @@ public readonly record struct CurrentNoiseDensity(double AmperesPerRootHertz) : 
     /// <inheritdoc />
     public double Si => AmperesPerRootHertz;
 
+    /// <summary>Builds a value from amperesPerRootHertz.</summary>
+    public static CurrentNoiseDensity FromAmperesPerRootHertz(double amperesPerRootHertz) => new(amperesPerRootHertz);
+
+    /// <summary>Builds a value from picoamperesPerRootHertz.</summary>
+    public static CurrentNoiseDensity FromPicoamperesPerRootHertz(double picoamperesPerRootHertz) => new(picoamperesPerRootHertz / 1e12);
+
+    /// <summary>Builds a value from femtoamperesPerRootHertz.</summary>
+    public static CurrentNoiseDensity FromFemtoamperesPerRootHertz(double femtoamperesPerRootHertz) => new(femtoamperesPerRootHertz / 1e15);
+
+    /// <summary>The value in picoamperesPerRootHertz.</summary>
+    public double PicoamperesPerRootHertz => AmperesPerRootHertz * 1e12;
+
+    /// <summary>The value in femtoamperesPerRootHertz.</summary>
+    public double FemtoamperesPerRootHertz => AmperesPerRootHertz * 1e15;
+
     /// <summary>Zero.</summary>
     public static CurrentNoiseDensity Zero => new(0);
 

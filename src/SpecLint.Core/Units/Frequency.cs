@@ -12,6 +12,33 @@ public readonly record struct Frequency(double Hertz) : IQuantity<Frequency>
     /// <inheritdoc />
     public double Si => Hertz;
 
+    /// <summary>Builds a frequency from an angular frequency ω in rad/s (f = ω / 2π), e.g. 1/(R·C).</summary>
+    public static Frequency FromRadiansPerSecond(double radiansPerSecond) => new(radiansPerSecond / (2 * Math.PI));
+
+    /// <summary>The angular frequency ω = 2π·f in rad/s.</summary>
+    public double RadiansPerSecond => 2 * Math.PI * Hertz;
+
+    /// <summary>Builds a value from hertz.</summary>
+    public static Frequency FromHertz(double hertz) => new(hertz);
+
+    /// <summary>Builds a value from kilohertz.</summary>
+    public static Frequency FromKilohertz(double kilohertz) => new(kilohertz * 1e3);
+
+    /// <summary>Builds a value from megahertz.</summary>
+    public static Frequency FromMegahertz(double megahertz) => new(megahertz * 1e6);
+
+    /// <summary>Builds a value from gigahertz.</summary>
+    public static Frequency FromGigahertz(double gigahertz) => new(gigahertz * 1e9);
+
+    /// <summary>The value in kilohertz.</summary>
+    public double Kilohertz => Hertz / 1e3;
+
+    /// <summary>The value in megahertz.</summary>
+    public double Megahertz => Hertz / 1e6;
+
+    /// <summary>The value in gigahertz.</summary>
+    public double Gigahertz => Hertz / 1e9;
+
     /// <summary>Zero.</summary>
     public static Frequency Zero => new(0);
 

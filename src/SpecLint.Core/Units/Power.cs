@@ -12,6 +12,27 @@ public readonly record struct Power(double Watts) : IQuantity<Power>
     /// <inheritdoc />
     public double Si => Watts;
 
+    /// <summary>Builds a value from watts.</summary>
+    public static Power FromWatts(double watts) => new(watts);
+
+    /// <summary>Builds a value from milliwatts.</summary>
+    public static Power FromMilliwatts(double milliwatts) => new(milliwatts / 1e3);
+
+    /// <summary>Builds a value from microwatts.</summary>
+    public static Power FromMicrowatts(double microwatts) => new(microwatts / 1e6);
+
+    /// <summary>Builds a value from nanowatts.</summary>
+    public static Power FromNanowatts(double nanowatts) => new(nanowatts / 1e9);
+
+    /// <summary>The value in milliwatts.</summary>
+    public double Milliwatts => Watts * 1e3;
+
+    /// <summary>The value in microwatts.</summary>
+    public double Microwatts => Watts * 1e6;
+
+    /// <summary>The value in nanowatts.</summary>
+    public double Nanowatts => Watts * 1e9;
+
     /// <summary>Zero.</summary>
     public static Power Zero => new(0);
 

@@ -12,6 +12,27 @@ public readonly record struct Resistance(double Ohms) : IQuantity<Resistance>
     /// <inheritdoc />
     public double Si => Ohms;
 
+    /// <summary>Builds a value from ohms.</summary>
+    public static Resistance FromOhms(double ohms) => new(ohms);
+
+    /// <summary>Builds a value from kiloohms.</summary>
+    public static Resistance FromKiloohms(double kiloohms) => new(kiloohms * 1e3);
+
+    /// <summary>Builds a value from megaohms.</summary>
+    public static Resistance FromMegaohms(double megaohms) => new(megaohms * 1e6);
+
+    /// <summary>Builds a value from gigaohms.</summary>
+    public static Resistance FromGigaohms(double gigaohms) => new(gigaohms * 1e9);
+
+    /// <summary>The value in kiloohms.</summary>
+    public double Kiloohms => Ohms / 1e3;
+
+    /// <summary>The value in megaohms.</summary>
+    public double Megaohms => Ohms / 1e6;
+
+    /// <summary>The value in gigaohms.</summary>
+    public double Gigaohms => Ohms / 1e9;
+
     /// <summary>Zero.</summary>
     public static Resistance Zero => new(0);
 

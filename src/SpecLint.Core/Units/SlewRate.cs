@@ -12,6 +12,15 @@ public readonly record struct SlewRate(double VoltsPerSecond) : IQuantity<SlewRa
     /// <inheritdoc />
     public double Si => VoltsPerSecond;
 
+    /// <summary>Builds a value from voltsPerSecond.</summary>
+    public static SlewRate FromVoltsPerSecond(double voltsPerSecond) => new(voltsPerSecond);
+
+    /// <summary>Builds a value from voltsPerMicrosecond.</summary>
+    public static SlewRate FromVoltsPerMicrosecond(double voltsPerMicrosecond) => new(voltsPerMicrosecond * 1e6);
+
+    /// <summary>The value in voltsPerMicrosecond.</summary>
+    public double VoltsPerMicrosecond => VoltsPerSecond / 1e6;
+
     /// <summary>Zero.</summary>
     public static SlewRate Zero => new(0);
 

@@ -15,6 +15,9 @@ public readonly record struct Temperature(double Kelvin) : IQuantity<Temperature
     /// <summary>Builds a temperature from degrees Celsius.</summary>
     public static Temperature FromCelsius(double celsius) => new(celsius + ZeroCelsiusInKelvin);
 
+    /// <summary>Builds a temperature from kelvin.</summary>
+    public static Temperature FromKelvin(double kelvin) => new(kelvin);
+
     /// <summary>The usual reference temperature of datasheets, 25 °C.</summary>
     public static Temperature Room => FromCelsius(25);
 

@@ -12,6 +12,21 @@ public readonly record struct Voltage(double Volts) : IQuantity<Voltage>
     /// <inheritdoc />
     public double Si => Volts;
 
+    /// <summary>Builds a value from volts.</summary>
+    public static Voltage FromVolts(double volts) => new(volts);
+
+    /// <summary>Builds a value from millivolts.</summary>
+    public static Voltage FromMillivolts(double millivolts) => new(millivolts / 1e3);
+
+    /// <summary>Builds a value from microvolts.</summary>
+    public static Voltage FromMicrovolts(double microvolts) => new(microvolts / 1e6);
+
+    /// <summary>The value in millivolts.</summary>
+    public double Millivolts => Volts * 1e3;
+
+    /// <summary>The value in microvolts.</summary>
+    public double Microvolts => Volts * 1e6;
+
     /// <summary>Zero.</summary>
     public static Voltage Zero => new(0);
 

@@ -12,6 +12,15 @@ public readonly record struct VoltageNoiseDensity(double VoltsPerRootHertz) : IQ
     /// <inheritdoc />
     public double Si => VoltsPerRootHertz;
 
+    /// <summary>Builds a value from voltsPerRootHertz.</summary>
+    public static VoltageNoiseDensity FromVoltsPerRootHertz(double voltsPerRootHertz) => new(voltsPerRootHertz);
+
+    /// <summary>Builds a value from nanovoltsPerRootHertz.</summary>
+    public static VoltageNoiseDensity FromNanovoltsPerRootHertz(double nanovoltsPerRootHertz) => new(nanovoltsPerRootHertz / 1e9);
+
+    /// <summary>The value in nanovoltsPerRootHertz.</summary>
+    public double NanovoltsPerRootHertz => VoltsPerRootHertz * 1e9;
+
     /// <summary>Zero.</summary>
     public static VoltageNoiseDensity Zero => new(0);
 

@@ -32,8 +32,8 @@ internal static class HouseRuleCompiler
     /// <summary>How many times the compiler ran in this process (the cache tests read it).</summary>
     public static int Invocations => Volatile.Read(ref s_invocations);
 
-    /// <summary>Extra analyzers run over house rules, such as the units analyzer; set once at start-up.</summary>
-    public static ImmutableArray<DiagnosticAnalyzer> ExtraAnalyzers { get; set; } = [];
+    /// <summary>Analyzers run over house rules besides the allow-list: the units analyzer, whose diagnostics become warnings at the .cs line.</summary>
+    public static ImmutableArray<DiagnosticAnalyzer> ExtraAnalyzers { get; } = SpecLint.Analyzers.UnitAnalyzers.All;
 
     /// <summary>A text that changes whenever the compile options or analyzers change (part of the cache key).</summary>
     public static string OptionsFingerprint =>

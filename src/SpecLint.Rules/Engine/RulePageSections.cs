@@ -9,7 +9,7 @@ namespace SpecLint.Rules.Engine;
 /// one (YAML that the tests run), the settings and the sources. The catalog tests, SARIF help text and the
 /// rule scaffold all take the headings from here, so there is one list to change.
 /// </summary>
-public static class RulePageSections
+internal static class RulePageSections
 {
     /// <summary>The condition checked, as a formula over the spec keys.</summary>
     public const string Condition = "Condition";
