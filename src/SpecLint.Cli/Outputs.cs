@@ -32,7 +32,9 @@ internal static class Outputs
                 output.Write(JsonReport.Write(run));
                 break;
             case "github":
-                GitHubAnnotations.Write(output, run.AllFindings.ToList(), Directory.GetCurrentDirectory());
+                // Compared with a base, only what the change introduced is annotated on the diff.
+                var annotated = run.Changes is null ? run.AllFindings : run.Specs.SelectMany(s => s.Findings).Where(run.Changes.IsNew).Concat(run.RunProblems);
+                GitHubAnnotations.Write(output, annotated.Where(f => !run.IsAccepted(f)).ToList(), Directory.GetCurrentDirectory());
                 output.WriteLine(TerminalReport.Summary(run));
                 JobSummary.FromEnvironment()?.Append(MarkdownReport.Render(run, Directory.GetCurrentDirectory(), new MarkdownReport.Options(request.Title)));
                 break;
@@ -98,6 +100,14 @@ internal static class Outputs
         var houseRules = rules.Select(r => r.Descriptor.Id).Where(run.Catalog.IsHouseRule).ToDictionary(id => id, id => run.Catalog.HouseRuleSource(id)!);
         var options = new SarifOptions(MarkdownReport.ToolVersion) { RulePages = pages, RepositoryRoot = Directory.GetCurrentDirectory(), HouseRuleSources = houseRules };
         File.WriteAllText(full, SarifWriter.Write(rules.Select(r => r.Descriptor), run.AllFindings.ToList(), options), Utf8);
+    }
+
+    /// <summary>Writes a text file (UTF-8, no byte order mark), creating its folder.</summary>
+    public static void WriteText(string path, string text)
+    {
+        var full = Path.GetFullPath(path);
+        Directory.CreateDirectory(Path.GetDirectoryName(full)!);
+        File.WriteAllText(full, text, Utf8);
     }
 
     private static bool UseColor(TextWriter output) =>

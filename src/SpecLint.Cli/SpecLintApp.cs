@@ -13,6 +13,7 @@ public static class SpecLintApp
         var root = new RootCommand("SpecLint: design-rule checks for transimpedance front-end specs. A design aid: verify on the bench.")
         {
             CheckCommand.Create(),
+            AcceptCommand.Create(),
             DemoCommand.Create(),
             SchemaCommand.Create(),
             RulesCommand.Create(),

@@ -25,12 +25,15 @@ internal sealed class CliHarness : IDisposable
     public string Path_(string relative) => Path.Combine(Root, relative);
 
     /// <summary>Runs with the scratch folder as the working directory (tests in this assembly run one at a time for that).</summary>
-    public (int Exit, string Out, string Err) Run(params string[] args)
+    public (int Exit, string Out, string Err) Run(params string[] args) => RunIn(".", args);
+
+    /// <summary>Runs with a folder inside the scratch folder as the working directory.</summary>
+    public (int Exit, string Out, string Err) RunIn(string folder, params string[] args)
     {
         lock (CurrentDirectoryLock)
         {
             var previous = Directory.GetCurrentDirectory();
-            Directory.SetCurrentDirectory(Root);
+            Directory.SetCurrentDirectory(Path.Combine(Root, folder));
             try
             {
                 using var output = new StringWriter();

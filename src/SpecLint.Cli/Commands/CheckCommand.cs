@@ -1,5 +1,8 @@
+using System.Collections.Immutable;
 using System.CommandLine;
 using System.Globalization;
+using SpecLint.Rules.Accepting;
+using SpecLint.Rules.Changes;
 using SpecLint.Rules.Checking;
 using SpecLint.Rules.Engine;
 
@@ -33,9 +36,13 @@ internal static class CheckCommand
         var nominal = new Option<bool>("--nominal-only") { Description = "Skip tolerance corners and Monte Carlo" };
         var quiet = new Option<bool>("--quiet") { Description = "No progress on stderr" };
         var noHouseRules = new Option<bool>("--no-house-rules") { Description = "Do not compile or run the repository's house rules (for pull requests from untrusted forks)" };
+        var against = new Option<string?>("--against") { Description = "Compare with the merge base of this git ref (e.g. origin/main): check the specs changed since then, with metric deltas and findings new, resolved or unchanged" };
+        var gate = new Option<string>("--gate") { Description = "With --against: 'all' (default) fails on any finding in the changed specs, 'new' only on findings the change introduced", DefaultValueFactory = _ => "all" };
+        gate.AcceptOnlyFromAmong("all", "new");
+        var accepted = new Option<string?>("--accepted") { Description = "A file written by 'speclint accept': its findings are reported as accepted and do not fail the run; entries that match nothing are listed" };
         var command = new Command("check", "Check spec files: schema, analysis, rules. Exit 0 pass, 1 findings at the fail level, 2 unusable input")
         {
-            paths, format, report, html, sarif, failOn, config, asOf, nominal, quiet, noHouseRules,
+            paths, format, report, html, sarif, failOn, config, asOf, nominal, quiet, noHouseRules, against, gate, accepted,
         };
         command.SetAction(parse =>
         {
@@ -76,7 +83,51 @@ internal static class CheckCommand
                 Progress = Progress.For(error, parse.GetValue(quiet)),
                 HouseRules = parse.GetValue(noHouseRules) ? null : HouseRuleSources.Create(),
             };
-            var run = CheckRunner.Run(options);
+            if (parse.GetValue(gate) == "new" && parse.GetValue(against) is null)
+            {
+                error.WriteLine("speclint: --gate new needs --against <ref>: only a comparison with a base tells which findings are new");
+                return ExitCodes.UnusableInput;
+            }
+
+            ImmutableArray<AcceptedEntry>? acceptedEntries = null;
+            if (parse.GetValue(accepted) is { } acceptedPath)
+            {
+                if (!File.Exists(acceptedPath))
+                {
+                    error.WriteLine($"speclint: --accepted: no such file '{acceptedPath}'; write one with 'speclint accept {acceptedPath}'");
+                    return ExitCodes.UnusableInput;
+                }
+
+                acceptedEntries = AcceptedFile.Read(acceptedPath, acceptedPath, out var why);
+                if (acceptedEntries is null)
+                {
+                    error.WriteLine($"speclint: {why}");
+                    return ExitCodes.UnusableInput;
+                }
+            }
+
+            CheckRun run;
+            if (parse.GetValue(against) is { } reference)
+            {
+                var changes = GitChanges.Read(Directory.GetCurrentDirectory(), reference, out var why);
+                if (changes is null)
+                {
+                    error.WriteLine($"speclint: {why}");
+                    return ExitCodes.UnusableInput;
+                }
+
+                run = ChangeCheck.Run(options, changes, parse.GetValue(gate) == "new" ? Gate.New : Gate.All);
+            }
+            else
+            {
+                run = CheckRunner.Run(options);
+            }
+
+            if (acceptedEntries is { } entries)
+            {
+                run = run with { Acceptance = Acceptance.Apply(parse.GetValue(accepted)!, entries, run.Specs) };
+            }
+
             Outputs.Write(run, request, output);
             return run.ExitCode;
         });

@@ -2,6 +2,7 @@ using System.Text;
 using System.Text.Encodings.Web;
 using System.Text.Json;
 using SpecLint.Core.Analysis;
+using SpecLint.Reporting.Changes;
 using SpecLint.Rules.Checking;
 using SpecLint.Rules.Engine;
 
@@ -25,7 +26,7 @@ internal static class JsonReport
             w.WriteStartArray("specs");
             foreach (var spec in run.Specs)
             {
-                WriteSpec(w, spec);
+                WriteSpec(w, spec, run);
             }
 
             w.WriteEndArray();
@@ -36,6 +37,8 @@ internal static class JsonReport
             }
 
             w.WriteEndArray();
+            ChangesJson.Write(w, run);
+            AcceptedJson.Write(w, run);
             w.WriteString("failOn", run.FailOn.Name());
             w.WriteNumber("exitCode", run.ExitCode);
             w.WriteEndObject();
@@ -44,7 +47,7 @@ internal static class JsonReport
         return Encoding.UTF8.GetString(buffer.ToArray()) + "\n";
     }
 
-    private static void WriteSpec(Utf8JsonWriter w, SpecOutcome spec)
+    private static void WriteSpec(Utf8JsonWriter w, SpecOutcome spec, CheckRun run)
     {
         w.WriteStartObject();
         w.WriteString("file", spec.File);
@@ -62,7 +65,7 @@ internal static class JsonReport
         w.WriteStartArray("findings");
         foreach (var f in spec.Findings)
         {
-            WriteFinding(w, f);
+            WriteFinding(w, f, run.IsAccepted(f));
         }
 
         w.WriteEndArray();
@@ -117,7 +120,7 @@ internal static class JsonReport
         w.WriteEndObject();
     }
 
-    internal static void WriteFinding(Utf8JsonWriter w, Finding f)
+    internal static void WriteFinding(Utf8JsonWriter w, Finding f, bool accepted = false)
     {
         w.WriteStartObject();
         w.WriteString("rule", f.RuleId);
@@ -139,6 +142,11 @@ internal static class JsonReport
         if (f.WaiverReason is not null)
         {
             w.WriteString("waiverReason", f.WaiverReason);
+        }
+
+        if (accepted)
+        {
+            w.WriteBoolean("accepted", true);
         }
 
         w.WriteEndObject();

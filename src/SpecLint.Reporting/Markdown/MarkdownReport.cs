@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Reflection;
 using System.Text;
+using SpecLint.Reporting.Changes;
 using SpecLint.Rules.Checking;
 using SpecLint.Rules.Engine;
 
@@ -45,6 +46,11 @@ internal sealed class MarkdownReport
     {
         Line($"# {options.Title}");
         Line();
+        foreach (var line in ChangesMarkdown.Lines(_run))
+        {
+            Line(line);
+        }
+
         RunContext(options);
         Summary();
         Findings();

@@ -1,4 +1,5 @@
 using System.Globalization;
+using SpecLint.Reporting.Changes;
 using SpecLint.Rules.Checking;
 using SpecLint.Rules.Engine;
 
@@ -17,7 +18,12 @@ internal static class TerminalReport
         ArgumentNullException.ThrowIfNull(output);
         foreach (var f in run.RunProblems.Concat(run.Specs.SelectMany(s => s.Findings)))
         {
-            output.WriteLine(Line(f, color));
+            output.WriteLine(Line(f, color) + (run.IsAccepted(f) ? " (accepted)" : ""));
+        }
+
+        foreach (var line in ChangesText.Lines(run))
+        {
+            output.WriteLine(line);
         }
 
         output.WriteLine(Summary(run));
@@ -50,6 +56,18 @@ internal static class TerminalReport
         if (waived > 0)
         {
             text += string.Create(CultureInfo.InvariantCulture, $", {waived} waived");
+        }
+
+        var accepted = all.Count(run.IsAccepted);
+        if (accepted > 0)
+        {
+            text += string.Create(CultureInfo.InvariantCulture, $", {accepted} accepted");
+        }
+
+        if (run.Changes is not null && run.Gate == Rules.Changes.Gate.New)
+        {
+            var fresh = all.Count(f => run.Changes.IsNew(f) && !f.Waived && !run.IsAccepted(f));
+            text += string.Create(CultureInfo.InvariantCulture, $"; {fresh} new in this change");
         }
 
         if (unusable > 0)

@@ -26,6 +26,12 @@ internal sealed record CheckOptions
     /// <summary>Compiles and loads the house rules a configuration names; null skips house rules (<c>--no-house-rules</c>).</summary>
     public IHouseRuleSource? HouseRules { get; init; }
 
+    /// <summary>
+    /// Keeps only the spec files it accepts after discovery (the files a change touched, one shard); null keeps all.
+    /// Finding no file at all is still an error; finding files and keeping none is not.
+    /// </summary>
+    public Func<string, bool>? Select { get; init; }
+
     /// <summary>Reports progress (file index, count, file) for long runs; null for none.</summary>
     public Action<int, int, string>? Progress { get; init; }
 }

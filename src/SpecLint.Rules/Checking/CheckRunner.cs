@@ -50,6 +50,11 @@ internal static class CheckRunner
                 $"no spec files matching {string.Join(", ", rootConfig.Include)} were found; check the path, or 'include' in .speclint.yaml"));
         }
 
+        if (options.Select is { } select)
+        {
+            files = [.. files.Where(select)];
+        }
+
         var outcomes = new List<SpecOutcome>();
         for (var i = 0; i < files.Count; i++)
         {

@@ -1,0 +1,78 @@
+using System.Globalization;
+using SpecLint.Reporting.Markdown;
+using SpecLint.Rules.Changes;
+using SpecLint.Rules.Checking;
+
+namespace SpecLint.Reporting.Changes;
+
+/// <summary>The "What this change does" section that opens the Markdown report (and so the job summary) of a comparison with a base.</summary>
+internal static class ChangesMarkdown
+{
+    public const string Heading = "## What this change does";
+
+    public static IEnumerable<string> Lines(CheckRun run)
+    {
+        ArgumentNullException.ThrowIfNull(run);
+        if (run.Changes is not { } changes)
+        {
+            yield break;
+        }
+
+        yield return Heading;
+        yield return "";
+        var count = changes.Specs.Length;
+        yield return string.Create(CultureInfo.InvariantCulture,
+            $"Compared with `{MarkdownText.Cell(changes.Ref)}` (merge base `{changes.ShortBase}`): {count} spec{(count == 1 ? "" : "s")} changed{(changes.AllSpecs ? "; the configuration or the house rules changed, so every spec was re-checked" : "")}. Gate: {(run.Gate == Gate.New ? "only new findings fail the run" : "every finding in the changed specs counts")}.");
+        yield return "";
+        if (count == 0)
+        {
+            yield break;
+        }
+
+        yield return "| Spec | Status | New | Resolved | Unchanged |";
+        yield return "|---|---|---:|---:|---:|";
+        foreach (var c in changes.Specs)
+        {
+            var file = MarkdownText.Cell(c.File) + (c.PreviousFile is null ? "" : " (from " + MarkdownText.Cell(c.PreviousFile) + ")");
+            yield return string.Create(CultureInfo.InvariantCulture,
+                $"| {MarkdownText.Cell(c.Name)}<br>{file} | {c.Status.Name()} | {c.Findings.New.Length} | {c.Findings.Resolved.Length} | {c.Findings.Unchanged.Length} |");
+        }
+
+        yield return "";
+        var deltas = changes.Specs.SelectMany(c => DeltaRows.For(c).Select(r => (c, r))).ToList();
+        if (deltas.Count > 0)
+        {
+            yield return "| Spec | Figure | Before | After | Change |";
+            yield return "|---|---|---:|---:|---:|";
+            foreach (var (c, r) in deltas)
+            {
+                yield return $"| {MarkdownText.Cell(c.Name)} | {r.Metric} | {MarkdownText.Cell(r.Before)} | {MarkdownText.Cell(r.After)} | {MarkdownText.Cell(r.Change)} |";
+            }
+
+            yield return "";
+        }
+
+        var lists = changes.Specs.Where(c => c.Findings.New.Length + c.Findings.Resolved.Length + c.BaseProblems.Length > 0).ToList();
+        foreach (var c in lists)
+        {
+            yield return $"**{MarkdownText.Cell(c.Name)}**";
+            yield return "";
+            foreach (var f in c.Findings.New)
+            {
+                yield return $"- new: `{f.RuleId}` at line {f.Line}: {MarkdownText.Cell(f.Message)}";
+            }
+
+            foreach (var f in c.Findings.Resolved)
+            {
+                yield return $"- resolved: `{f.RuleId}`: {MarkdownText.Cell(f.Message)}";
+            }
+
+            foreach (var p in c.BaseProblems)
+            {
+                yield return $"- the base version is not a valid spec (line {p.Line}): {MarkdownText.Cell(p.Message)}";
+            }
+
+            yield return "";
+        }
+    }
+}

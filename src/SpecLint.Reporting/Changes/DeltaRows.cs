@@ -1,0 +1,55 @@
+using System.Globalization;
+using SpecLint.Core.Units;
+using SpecLint.Reporting.Markdown;
+using SpecLint.Rules.Changes;
+
+namespace SpecLint.Reporting.Changes;
+
+/// <summary>One figure of a changed spec, before and after, as display text.</summary>
+/// <param name="Metric">What it is.</param>
+/// <param name="Before">The base value ("—" when there is none).</param>
+/// <param name="After">The head value ("—" when there is none).</param>
+/// <param name="Change">The difference, or "" when it cannot be computed.</param>
+internal sealed record DeltaRow(string Metric, string Before, string After, string Change);
+
+/// <summary>The metric deltas of a changed spec, in the order a reviewer reads them; rows whose value did not change are left out.</summary>
+internal static class DeltaRows
+{
+    private const string None = "—";
+
+    public static IEnumerable<DeltaRow> For(SpecChange change)
+    {
+        ArgumentNullException.ThrowIfNull(change);
+        var b = change.MetricsBefore;
+        var a = change.MetricsAfter;
+        var rows = new[]
+        {
+            Row("Phase margin", b?.PhaseMarginDeg, a?.PhaseMarginDeg, MetricRows.Deg, Difference("°", "0.0")),
+            Row("Phase margin, worst corner", b?.PhaseMarginDegMin, a?.PhaseMarginDegMin, MetricRows.Deg, Difference("°", "0.0")) with
+            {
+                After = a?.PhaseMarginDegMin is { } w ? MetricRows.Deg(w) + (a.PhaseMarginMinCorner is { Length: > 0 } c ? $" ({c})" : "") : None,
+            },
+            Row("Bandwidth", b?.BandwidthHz, a?.BandwidthHz, v => MetricRows.Q(v, Dimension.Frequency), Relative),
+            Row("Peaking", b?.PeakingDb, a?.PeakingDb, v => Text($"{v:0.00} dB"), Difference(" dB", "0.00")),
+            Row("Input noise, rms", b?.InputNoiseRmsA, a?.InputNoiseRmsA, v => MetricRows.Q(v, Dimension.Current), Relative),
+            Row("Output low", b?.OutputMinV, a?.OutputMinV, v => MetricRows.Q(v, Dimension.Voltage), (x, y) => Signed(MetricRows.Q(y - x, Dimension.Voltage), y - x)),
+            Row("Output high", b?.OutputMaxV, a?.OutputMaxV, v => MetricRows.Q(v, Dimension.Voltage), (x, y) => Signed(MetricRows.Q(y - x, Dimension.Voltage), y - x)),
+            Row("Yield", b?.Yield, a?.Yield, v => Text($"{100 * v:0.0} %"), (x, y) => Signed(Text($"{Math.Abs(100 * (y - x)):0.0} points"), y - x)),
+        };
+        return rows.Where(r => r.Before != r.After);
+    }
+
+    private static DeltaRow Row(string metric, double? before, double? after, Func<double, string> format, Func<double, double, string> change) =>
+        new(metric, before is { } x ? format(x) : None, after is { } y ? format(y) : None, before is { } p && after is { } q ? change(p, q) : "");
+
+    private static Func<double, double, string> Difference(string unit, string pattern) =>
+        (x, y) => (y - x >= 0 ? "+" : "−") + Math.Abs(y - x).ToString(pattern, CultureInfo.InvariantCulture) + unit;
+
+    private static string Relative(double x, double y) =>
+        x == 0 ? "" : (y >= x ? "+" : "−") + Text($"{Math.Abs(100 * (y - x) / x):0.#} %");
+
+    private static string Signed(string magnitude, double difference) =>
+        (difference >= 0 ? "+" : "−") + magnitude.TrimStart('-', '−');
+
+    private static string Text(FormattableString s) => s.ToString(CultureInfo.InvariantCulture);
+}
