@@ -91,15 +91,20 @@ internal static class Outputs
     }
 
     /// <summary>Writes SARIF 2.1.0 for code scanning.</summary>
-    public static void WriteSarif(CheckRun run, string sarifPath)
+    public static void WriteSarif(CheckRun run, string sarifPath) => WriteSarif(run.Catalog, run.AllFindings.ToList(), sarifPath);
+
+    /// <summary>Writes SARIF 2.1.0 for findings read back from JSON (merged shards): the built-in rules describe them.</summary>
+    public static void WriteSarif(IReadOnlyList<Finding> findings, string sarifPath) => WriteSarif(RuleCatalog.BuiltIn, findings, sarifPath);
+
+    private static void WriteSarif(RuleCatalog catalog, IReadOnlyList<Finding> findings, string sarifPath)
     {
         var full = Path.GetFullPath(sarifPath);
         Directory.CreateDirectory(Path.GetDirectoryName(full)!);
-        var rules = run.Catalog.Rules;
-        var pages = rules.Select(r => r.Descriptor.Id).Select(id => (id, page: run.Catalog.Page(id))).Where(x => x.page is not null).ToDictionary(x => x.id, x => x.page!);
-        var houseRules = rules.Select(r => r.Descriptor.Id).Where(run.Catalog.IsHouseRule).ToDictionary(id => id, id => run.Catalog.HouseRuleSource(id)!);
+        var rules = catalog.Rules;
+        var pages = rules.Select(r => r.Descriptor.Id).Select(id => (id, page: catalog.Page(id))).Where(x => x.page is not null).ToDictionary(x => x.id, x => x.page!);
+        var houseRules = rules.Select(r => r.Descriptor.Id).Where(catalog.IsHouseRule).ToDictionary(id => id, id => catalog.HouseRuleSource(id)!);
         var options = new SarifOptions(MarkdownReport.ToolVersion) { RulePages = pages, RepositoryRoot = Directory.GetCurrentDirectory(), HouseRuleSources = houseRules };
-        File.WriteAllText(full, SarifWriter.Write(rules.Select(r => r.Descriptor), run.AllFindings.ToList(), options), Utf8);
+        File.WriteAllText(full, SarifWriter.Write(rules.Select(r => r.Descriptor), findings, options), Utf8);
     }
 
     /// <summary>Writes a text file (UTF-8, no byte order mark), creating its folder.</summary>

@@ -14,6 +14,7 @@ public static class SpecLintApp
         {
             CheckCommand.Create(),
             AcceptCommand.Create(),
+            MergeCommand.Create(),
             DemoCommand.Create(),
             SchemaCommand.Create(),
             RulesCommand.Create(),

@@ -39,10 +39,11 @@ internal static class CheckCommand
         var against = new Option<string?>("--against") { Description = "Compare with the merge base of this git ref (e.g. origin/main): check the specs changed since then, with metric deltas and findings new, resolved or unchanged" };
         var gate = new Option<string>("--gate") { Description = "With --against: 'all' (default) fails on any finding in the changed specs, 'new' only on findings the change introduced", DefaultValueFactory = _ => "all" };
         gate.AcceptOnlyFromAmong("all", "new");
+        var shard = new Option<string?>("--shard") { Description = "Check only shard i of n (i/n, e.g. 2/4; stable by path hash); combine the JSON outputs with 'speclint merge'" };
         var accepted = new Option<string?>("--accepted") { Description = "A file written by 'speclint accept': its findings are reported as accepted and do not fail the run; entries that match nothing are listed" };
         var command = new Command("check", "Check spec files: schema, analysis, rules. Exit 0 pass, 1 findings at the fail level, 2 unusable input")
         {
-            paths, format, report, html, sarif, failOn, config, asOf, nominal, quiet, noHouseRules, against, gate, accepted,
+            paths, format, report, html, sarif, failOn, config, asOf, nominal, quiet, noHouseRules, against, gate, accepted, shard,
         };
         command.SetAction(parse =>
         {
@@ -87,6 +88,18 @@ internal static class CheckCommand
             {
                 error.WriteLine("speclint: --gate new needs --against <ref>: only a comparison with a base tells which findings are new");
                 return ExitCodes.UnusableInput;
+            }
+
+            Shard? part = null;
+            if (parse.GetValue(shard) is { } shardText && (part = Shard.Parse(shardText, out var shardError)) is null)
+            {
+                error.WriteLine($"speclint: {shardError}");
+                return ExitCodes.UnusableInput;
+            }
+
+            if (part is not null)
+            {
+                options = options with { Select = part.Contains };
             }
 
             ImmutableArray<AcceptedEntry>? acceptedEntries = null;
