@@ -65,8 +65,7 @@ internal static class CheckCommand
                 Progress = Progress.For(error, parse.GetValue(quiet)),
             };
             var run = CheckRunner.Run(options);
-            Outputs.Write(run, request, output);
-            return run.ExitCode;
+            return Outputs.Write(run, request, output, error);
         });
         return command;
     }

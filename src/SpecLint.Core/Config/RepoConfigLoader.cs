@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using System.Globalization;
 using System.Text.Json;
 using System.Text.Json.Nodes;
+using SpecLint.Core.Files;
 using SpecLint.Core.Spec;
 using SpecLint.Core.Spec.Schema;
 using SpecLint.Core.Spec.Yaml;
@@ -49,12 +50,14 @@ public static class RepoConfigLoader
         try
         {
             var info = new FileInfo(path);
-            if (info.Exists && info.Length > YamlTreeReader.MaxFileBytes)
+            if (FileKinds.Of(path) == FileKind.Regular && info.Length > YamlTreeReader.MaxFileBytes)
             {
                 return Invalid(shown, YamlTreeReader.TooLargeMessage(info.Length));
             }
 
-            return Load(YamlTreeReader.Read(File.ReadAllBytes(path)), shown, path);
+            return BoundedFileReader.TryRead(path, YamlTreeReader.MaxFileBytes, out var bytes, out var why)
+                ? Load(YamlTreeReader.Read(bytes), shown, path)
+                : Invalid(shown, why);
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException or NotSupportedException or ArgumentException)
         {
