@@ -97,7 +97,9 @@ public static class RepoConfigLoader
         var obj = root as JsonObject ?? [];
         var d = RepoConfig.Default;
 
+        // Only when every entry is text: a number among the globs was reported by the schema at its position.
         var include = Ok("/include", sink) && obj["include"] is JsonArray inc
+            && inc.All(n => n is JsonValue v && v.GetValueKind() == JsonValueKind.String)
             ? [.. inc.Select(n => n!.GetValue<string>())]
             : d.Include;
         var failOn = Ok("/fail-on", sink) && obj["fail-on"] is JsonValue f ? ParseSeverity(f.GetValue<string>()) : d.FailOn;

@@ -88,8 +88,9 @@ public sealed class RuleContext
     {
         var option = descriptor.Options.FirstOrDefault(o => o.Key == key)
             ?? throw new ArgumentException($"rule '{descriptor.Id}' declares no option '{key}'", nameof(key));
-        return configuration.Options.TryGetValue(key, out var text)
-            ? QuantityParser.ParseSingle(text, option.Dimension)
+        // An unusable value was already reported as config-invalid (exit 2); the rule runs on its default.
+        return configuration.Options.TryGetValue(key, out var text) && OptionValues.TryRead(option, text, out var si, out _)
+            ? si
             : option.DefaultSi;
     }
 }

@@ -4,6 +4,7 @@ using System.Globalization;
 using System.Text;
 using System.Text.Json.Nodes;
 using System.Text.RegularExpressions;
+using SpecLint.Core.Text;
 using YamlDotNet.Core;
 using YamlDotNet.Core.Events;
 
@@ -72,6 +73,11 @@ public static partial class YamlTreeReader
         if (text.Length > MaxFileBytes)
         {
             return Fail(1, 1, $"the file is over {MaxFileBytes.ToString(CultureInfo.InvariantCulture)} bytes (1 MiB); split it into one file per channel");
+        }
+
+        if (TextScreen.FindDisallowed(text) is { } bad)
+        {
+            return Fail(bad.Line, bad.Column, bad.Message);
         }
 
         var state = new ReaderState(new Parser(new StringReader(text)), text);
@@ -273,12 +279,10 @@ public static partial class YamlTreeReader
                 return;
             }
 
-            if (scalar && tag.Value == "tag:yaml.org,2002:str")
-            {
-                return;
-            }
-
-            _problems.Add(new YamlProblem(Line(start), Column(start), pointer, $"the YAML tag \"{tag.Value}\" is not supported in spec files; remove it (quote a value to keep it as text)"));
+            // Every tag is refused, !!str included: a spec types its values by key, and a tag the reader
+            // ignored (on a key, say) would make the file mean something other than what it shows.
+            var what = scalar ? "" : " on a map or list";
+            _problems.Add(new YamlProblem(Line(start), Column(start), pointer, $"the YAML tag \"{TextSafety.ForTerminal(tag.Value)}\"{what} is not supported in spec files; remove it (quote a value to keep it as text)"));
         }
 
         private void Record(string pointer, Mark start, Mark end, Mark? keyMark)
@@ -320,6 +324,7 @@ public static partial class YamlTreeReader
                 }
 
                 Count(key, pointer);
+                CheckTag(JsonPointerText.Append(pointer, key.Value), key.Start, key.Tag, scalar: true);
                 parser.MoveNext();
                 var childPointer = JsonPointerText.Append(pointer, key.Value);
                 if (key.Value == "<<" && key.Style == ScalarStyle.Plain)
