@@ -197,7 +197,7 @@ public static partial class YamlTreeReader
                     throw new FatalProblem(second.Start, "", "the file holds more than one YAML document (a second \"---\"); put each channel in its own file");
                 }
 
-                return new YamlTree(root, true, _positions, _scalarText, [.. _problems]);
+                return new YamlTree(root, true, _positions, _scalarText, Clamped());
             }
             catch (FatalProblem f)
             {
@@ -221,7 +221,28 @@ public static partial class YamlTreeReader
                     "YAML syntax: the file ends inside a { } or [ ]; a closing bracket is missing"));
             }
 
-            return new YamlTree(null, false, _positions, _scalarText, [.. _problems]);
+            return new YamlTree(null, false, _positions, _scalarText, Clamped());
+        }
+
+        /// <summary>
+        /// The parser places an error at the end of the input one line past the last line break; a position
+        /// outside the file helps no one (an editor cannot jump there), so it is moved to the end of the last line.
+        /// </summary>
+        private ImmutableArray<YamlProblem> Clamped()
+        {
+            var lines = text.Split(["\r\n", "\n", "\r"], StringSplitOptions.None);
+            var lastLine = lines.Length;
+            while (lastLine > 1 && lines[lastLine - 1].Length == 0)
+            {
+                lastLine--;
+            }
+
+            return [.. _problems.Select(p =>
+            {
+                var line = Math.Min(p.Line, lastLine);
+                var column = Math.Min(p.Column, lines[line - 1].Length + 1);
+                return p.Line == line && p.Column == column ? p : p with { Line = line, Column = column };
+            })];
         }
 
         private static int Line(Mark m) => (int)Math.Max(1, m.Line);
