@@ -17,7 +17,7 @@ public static class BoundedFileReader
         switch (FileKinds.Of(path))
         {
             case FileKind.Missing:
-                error = "no such file";
+                error = "cannot read the file: no such file";
                 return false;
             case FileKind.Directory:
                 error = "this is a folder, not a file; give the path of a file";
