@@ -125,9 +125,10 @@ internal static class Outputs
     /// <summary>Writes SARIF 2.1.0 for code scanning.</summary>
     public static void WriteSarif(CheckRun run, string sarifPath)
     {
-        var rules = RuleCatalog.BuiltIn.Rules;
-        var pages = rules.Select(r => r.Descriptor.Id).Select(id => (id, page: RuleDocs.Page(id))).Where(x => x.page is not null).ToDictionary(x => x.id, x => x.page!);
-        var options = new SarifOptions(MarkdownReport.ToolVersion) { RulePages = pages, RepositoryRoot = Directory.GetCurrentDirectory() };
+        var rules = run.Catalog.Rules;
+        var pages = rules.Select(r => r.Descriptor.Id).Select(id => (id, page: run.Catalog.Page(id))).Where(x => x.page is not null).ToDictionary(x => x.id, x => x.page!);
+        var houseRules = rules.Select(r => r.Descriptor.Id).Where(run.Catalog.IsHouseRule).ToDictionary(id => id, id => run.Catalog.HouseRuleSource(id)!);
+        var options = new SarifOptions(MarkdownReport.ToolVersion) { RulePages = pages, RepositoryRoot = Directory.GetCurrentDirectory(), HouseRuleSources = houseRules };
         AtomicFile.WriteAllText(sarifPath, SarifWriter.Write(rules.Select(r => r.Descriptor), run.AllFindings.ToList(), options));
     }
 

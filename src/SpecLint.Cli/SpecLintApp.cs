@@ -16,8 +16,18 @@ public static class SpecLintApp
             DemoCommand.Create(),
             SchemaCommand.Create(),
             RulesCommand.Create(),
-            ExplainCommand.Create(),
+            WhyCommand.Create(),
+            NewRuleCommand.Create(),
+            TestRulesCommand.Create(),
         };
+
+        var problem = UsageCheck.Problem(root, args);
+        if (problem is not null)
+        {
+            error.WriteLine($"speclint: {problem}");
+            error.WriteLine("Run 'speclint --help' for usage.");
+            return ExitCodes.UnusableInput;
+        }
 
         var parse = root.Parse(args);
         var config = new InvocationConfiguration { Output = output, Error = error, EnableDefaultExceptionHandler = false };

@@ -1,7 +1,7 @@
 namespace SpecLint.Reporting;
 
 /// <summary>Turns a finding's file (as given on the command line) into the repository-relative, forward-slash path CI tools match on.</summary>
-public static class RepositoryPath
+internal static class RepositoryPath
 {
     /// <summary>
     /// Relative to <paramref name="repositoryRoot"/> when the file is absolute and inside it; backslashes become

@@ -101,8 +101,9 @@ public sealed class CheckCommandTests
             Assert.True(metrics.TryGetProperty(key, out _), key);
         }
 
-        Assert.True(spec.TryGetProperty("corners", out _));
-        Assert.True(spec.TryGetProperty("monteCarlo", out _));
+        Assert.Equal(JsonValueKind.Object, spec.GetProperty("corners").ValueKind);
+        Assert.True(spec.GetProperty("corners").GetProperty("phaseMarginDegMin").GetDouble() <= metrics.GetProperty("phaseMarginDeg").GetDouble());
+        Assert.InRange(spec.GetProperty("monteCarlo").GetProperty("yield").GetDouble(), 0, 1);
         var pm = spec.GetProperty("findings").EnumerateArray().Single(f => f.GetProperty("rule").GetString() == "phase-margin");
         Assert.Equal("error", pm.GetProperty("severity").GetString());
         Assert.False(pm.GetProperty("waived").GetBoolean());
@@ -110,7 +111,7 @@ public sealed class CheckCommandTests
         Assert.True(pm.GetProperty("column").GetInt32() > 0);
         var fix = pm.GetProperty("fix");
         Assert.Equal("/feedback/capacitance", fix.GetProperty("path").GetString());
-        // The fix value must follow the quantity grammar (DESIGN §5).
+        // The fix value must follow the quantity grammar (references.md §D5).
         Assert.True(QuantityParser.Parse(fix.GetProperty("value").GetString()!, Dimension.Capacitance).Typ > 0);
     }
 

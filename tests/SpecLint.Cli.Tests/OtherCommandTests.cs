@@ -61,7 +61,7 @@ public sealed class OtherCommandTests
     }
 
     [Fact]
-    public void Rules_lists_every_rule_and_explain_prints_its_page()
+    public void Rules_lists_every_rule_and_why_prints_its_page()
     {
         using var cli = new CliHarness();
         var (exit, output, _) = cli.Run("rules");
@@ -71,9 +71,81 @@ public sealed class OtherCommandTests
             Assert.Contains(id, output, StringComparison.Ordinal);
         }
 
-        var (explainExit, page, _) = cli.Run("explain", "output-headroom");
-        Assert.Equal(0, explainExit);
+        Assert.Contains("'speclint why <id>'", output, StringComparison.Ordinal);
+        var (whyExit, page, _) = cli.Run("why", "output-headroom");
+        Assert.Equal(0, whyExit);
         Assert.StartsWith("# output-headroom:", page, StringComparison.Ordinal);
-        Assert.Equal(2, cli.Run("explain", "no-such-rule").Exit);
+        Assert.Contains("## Flagged design", page, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Why_names_the_closest_id_for_a_misspelt_one()
+    {
+        using var cli = new CliHarness();
+
+        var (exit, output, error) = cli.Run("why", "phase-margn");
+
+        Assert.Equal(2, exit);
+        Assert.Empty(output);
+        Assert.Contains("no rule 'phase-margn'. Did you mean 'phase-margin'?", error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Why_shows_pages_from_any_page_source()
+    {
+        var command = Commands.WhyCommand.Create(id => id == "team-margin" ? "# team-margin: a house page\n" : null, () => ["team-margin"]);
+        var root = new System.CommandLine.RootCommand { command };
+        using var output = new StringWriter();
+        using var error = new StringWriter();
+
+        var exit = root.Parse(["why", "team-margin"]).Invoke(new System.CommandLine.InvocationConfiguration { Output = output, Error = error });
+
+        Assert.Equal(0, exit);
+        Assert.Equal("# team-margin: a house page\n", output.ToString());
+    }
+
+    [Fact]
+    public void Explain_is_not_a_command_and_points_to_why()
+    {
+        using var cli = new CliHarness();
+
+        var (exit, output, error) = cli.Run("explain", "phase-margin");
+
+        Assert.Equal(2, exit);
+        Assert.Empty(output);
+        Assert.Contains("'explain' is not a SpecLint command", error, StringComparison.Ordinal);
+        Assert.Contains("'speclint why <id>'", error, StringComparison.Ordinal);
+    }
+
+    [Theory]
+    [InlineData("chek", "unknown command 'chek'. Did you mean 'check'?")]
+    [InlineData("rule", "unknown command 'rule'. Did you mean 'rules'?")]
+    [InlineData("--verison", "unknown option '--verison' for speclint. Did you mean '--version'?")]
+    public void An_unknown_command_gets_a_did_you_mean(string word, string expected)
+    {
+        using var cli = new CliHarness();
+
+        var (exit, _, error) = cli.Run(word);
+
+        Assert.Equal(2, exit);
+        Assert.Contains(expected, error, StringComparison.Ordinal);
+    }
+
+    [Theory]
+    [InlineData("--formt", "Did you mean '--format'?")]
+    [InlineData("--nominal", "Did you mean '--nominal-only'?")]
+    [InlineData("--fail-on=warning2", null)]
+    public void A_mistyped_option_is_never_read_as_a_path(string option, string? hint)
+    {
+        using var cli = new CliHarness();
+
+        var (exit, output, error) = cli.Run("check", option, "json");
+
+        Assert.Equal(2, exit);
+        Assert.DoesNotContain("no such file", output + error, StringComparison.Ordinal);
+        if (hint is not null)
+        {
+            Assert.Contains($"unknown option '{option}' for 'check'. {hint}", error, StringComparison.Ordinal);
+        }
     }
 }

@@ -8,7 +8,7 @@ public sealed class BandwidthBelowRequirementRuleTests
 {
     private const string Id = "bandwidth";
 
-    // REFERENCE §3.2 worked example: Cin = 100 pF, Rf = 1 MΩ, GBW = 10 MHz, A0 = 1e9.
+    // references.md §3.2 worked example: Cin = 100 pF, Rf = 1 MΩ, GBW = 10 MHz, A0 = 1e9.
     private static string WorkedExample(string cf, string requirements) => $$"""
         {{Parts.Header}}
         conditions: { temperature: 25 °C, supply: { positive: 15 V, negative: -15 V } }
@@ -25,7 +25,7 @@ public sealed class BandwidthBelowRequirementRuleTests
     [Fact]
     public void Accepts_a_bandwidth_above_the_requirement()
     {
-        // REFERENCE §3.2: the Butterworth Cf 1.7841 pF gives f−3dB = 125.04 kHz.
+        // references.md §3.2: the Butterworth Cf 1.7841 pF gives f−3dB = 125.04 kHz.
         Lint.Check(WorkedExample("1.7841 pF", "  bandwidth: 120 kHz")).Clean(Id);
     }
 
@@ -38,7 +38,7 @@ public sealed class BandwidthBelowRequirementRuleTests
     [Fact]
     public void Flags_a_bandwidth_below_the_requirement_at_the_requirement()
     {
-        // 125.04 kHz < 130 kHz (REFERENCE §3.2).
+        // 125.04 kHz < 130 kHz (references.md §3.2).
         var f = Lint.Check(WorkedExample("1.7841 pF", "  bandwidth: [|130 kHz|]")).SingleAtMark(Id, Severity.Error);
 
         Assert.Equal("/requirements/bandwidth", f.Pointer);
@@ -65,14 +65,14 @@ public sealed class BandwidthBelowRequirementRuleTests
         var cf = QuantityParser.Parse(f.Fix!.Value, Dimension.Capacitance).Typ;
         Assert.True(cf < 1.7841e-12);
         Assert.True(fixedRun.Outcome.Analysis!.PhaseMargin!.Value.Degrees >= 50);
-        // Independent: the floor holds on the closed-form loop too (REFERENCE §1 rows 1–5, A0 → ∞).
+        // Independent: the floor holds on the closed-form loop too (references.md §1 rows 1–5, A0 → ∞).
         Assert.True(Reference.PhaseMarginDeg(100e-12, 1e6, cf, 10e6) >= 50);
     }
 
     [Fact]
     public void Says_no_capacitor_works_when_the_op_amp_is_too_slow()
     {
-        // f−3dB ≈ √(GBW/(2π·Rf·Cin)) = 126 kHz at best (REFERENCE §1 row 16): 1 MHz is out of reach with 45° kept.
+        // f−3dB ≈ √(GBW/(2π·Rf·Cin)) = 126 kHz at best (references.md §1 row 16): 1 MHz is out of reach with 45° kept.
         var f = Lint.Check(WorkedExample("1.7841 pF", "  bandwidth: [|1 MHz|]")).SingleAtMark(Id, Severity.Error);
 
         Assert.Null(f.Fix);

@@ -23,7 +23,7 @@ public sealed class InputNoiseAboveLimitRuleTests
 
     /// <summary>
     /// Input-referred rms over 1–10 Hz by hand: S = 4kT/Rf [J][N] + 2q·Imin [S] + in², shaped by the feedback pole
-    /// |ZT(f)/ZT(0)|² = 1/(1 + (f/fz)²), fz = 1/(2π·Rf·Cf) = 159 Hz, integrated in closed form (REFERENCE §1 rows 8–10).
+    /// |ZT(f)/ZT(0)|² = 1/(1 + (f/fz)²), fz = 1/(2π·Rf·Cf) = 159 Hz, integrated in closed form (references.md §1 rows 8–10).
     /// The op-amp's e_n adds (en·NG/Rf)² ≈ 1e-34 A²/Hz, 1e-5 of the total, and the loop's own pole at ~MHz nothing.
     /// </summary>
     private static double HandInputRms()

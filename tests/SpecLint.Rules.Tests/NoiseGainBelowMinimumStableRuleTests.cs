@@ -8,7 +8,7 @@ public sealed class NoiseGainBelowMinimumStableRuleTests
 {
     private const string Id = "min-stable-gain";
 
-    // Cin = sensor 6 pF + common-mode 2 pF + differential 1 pF + board stray 1 pF = 10 pF (REFERENCE §1 row 2).
+    // Cin = sensor 6 pF + common-mode 2 pF + differential 1 pF + board stray 1 pF = 10 pF (references.md §1 row 2).
     private const double Cin = 10e-12;
 
     private static string Channel(string cf, string gmin = "5", string cpar = "0 pF") => $$"""
@@ -62,7 +62,7 @@ public sealed class NoiseGainBelowMinimumStableRuleTests
     {
         var r = Lint.Check(Channel(cf, gmin, cpar));
 
-        // REFERENCE §1 row 7: the high-frequency noise gain plateau is 1 + Cin/(Cf + Cpar).
+        // references.md §1 row 7: the high-frequency noise gain plateau is 1 + Cin/(Cf + Cpar).
         var noiseGain = 1 + (Cin / (QuantityParser.ParseSingle(cf, Dimension.Capacitance) + QuantityParser.ParseSingle(cpar, Dimension.Capacitance)));
         Assert.Equal(noiseGain < double.Parse(gmin, System.Globalization.CultureInfo.InvariantCulture), r.Of(Id).Count == 1);
     }
@@ -90,7 +90,7 @@ public sealed class NoiseGainBelowMinimumStableRuleTests
 
         r.ApplyFixAndRecheck(f);
 
-        // Independent: Cf ≤ Cin/(Gmin − 1) = 2.5 pF, the largest E12 value below it (REFERENCE §3.4).
+        // Independent: Cf ≤ Cin/(Gmin − 1) = 2.5 pF, the largest E12 value below it (references.md §3.4).
         var expected = Reference.AtOrBelow(Reference.E12, Cin / (5 - 1));
         Reference.AssertClose(expected, QuantityParser.Parse(f.Fix!.Value, Dimension.Capacitance).Typ);
     }

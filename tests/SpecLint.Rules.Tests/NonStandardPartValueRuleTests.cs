@@ -19,7 +19,7 @@ public sealed class NonStandardPartValueRuleTests
           capacitance: {{cf}}
         """;
 
-    // Series membership from REFERENCE §3.4 (IEC 60063, values from memory): the tolerance picks the series.
+    // Series membership from references.md §3.4 (IEC 60063, values from memory): the tolerance picks the series.
     [Theory]
     [InlineData("4.3 kΩ ±5%", true)]        // E24 (the round(10^(i/24)) formula would give 4.2)
     [InlineData("4.3 kΩ ±10%", false)]      // not E12
@@ -49,6 +49,7 @@ public sealed class NonStandardPartValueRuleTests
         }
     }
 
+    // Capacitor rows: E12/E24 lists of references.md §3.4 ([IEC60063], from memory).
     [Theory]
     [InlineData("2.7 pF ±10%", true)]
     [InlineData("2.5 pF ±10%", false)]

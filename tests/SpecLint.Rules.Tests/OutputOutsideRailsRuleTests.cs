@@ -8,7 +8,7 @@ public sealed class OutputOutsideRailsRuleTests
 {
     private const string Id = "output-headroom";
 
-    // Hand computation (REFERENCE §1 row 12, common practice): Vout,max = Vbias + Imax·Rf + |Vos|·(1 + Rf/Rsh) + |Ib|·Rf
+    // Hand computation (references.md §1 row 12, common practice): Vout,max = Vbias + Imax·Rf + |Vos|·(1 + Rf/Rsh) + |Ib|·Rf
     // (Rsh = ∞, Ib = 0, no dark current) must stay ≤ V+min − swing − margin = 4.75 V − 50 mV − 100 mV = 4.6 V.
     private const double Bias = 0.5, Imax = 10e-6, Vos = 1e-3, HighLimit = (5 * 0.95) - 0.05 - 0.1;
 
@@ -91,7 +91,7 @@ public sealed class OutputOutsideRailsRuleTests
     [Fact]
     public void Flags_an_output_pulled_below_the_negative_limit_when_the_current_flows_into_the_node()
     {
-        // DESIGN §3 orientation: into-node moves the output down from bias: 4.5 V − 10 µA·470 kΩ − 1 mV < 0.15 V.
+        // references.md §D3 orientation: into-node moves the output down from bias: 4.5 V − 10 µA·470 kΩ − 1 mV < 0.15 V.
         var r = Lint.Check(Channel("[|470 kΩ ±5%|]", bias: "4.5 V", direction: "into-node"));
 
         Assert.Contains("goes down to", r.SingleAtMark(Id, Severity.Error).Message, StringComparison.Ordinal);
@@ -130,7 +130,7 @@ public sealed class OutputOutsideRailsRuleTests
 
         r.ApplyFixAndRecheck(f);
 
-        // Independent: the largest value of the tolerance's series (REFERENCE §3.4) with 0.5 V + 10 µA·R + 1 mV ≤ 4.6 V.
+        // Independent: the largest value of the tolerance's series (references.md §3.4) with 0.5 V + 10 µA·R + 1 mV ≤ 4.6 V.
         var series = rf.EndsWith("±5%", StringComparison.Ordinal) ? Reference.E24 : Reference.E96;
         var expected = Reference.AtOrBelow(series, (HighLimit - Bias - Vos) / Imax);
         Reference.AssertClose(expected, QuantityParser.Parse(f.Fix!.Value, Dimension.Resistance).Typ);

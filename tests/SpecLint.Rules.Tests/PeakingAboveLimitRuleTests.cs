@@ -7,7 +7,7 @@ public sealed class PeakingAboveLimitRuleTests
 {
     private const string Id = "peaking";
 
-    // REFERENCE §3.2 worked example: Cin = 100 pF, Rf = 1 MΩ, GBW = 10 MHz, A0 = 1e9.
+    // references.md §3.2 worked example: Cin = 100 pF, Rf = 1 MΩ, GBW = 10 MHz, A0 = 1e9.
     private static string WorkedExample(string cf, string requirements = "") => $$"""
         {{Parts.Header}}
         conditions: { temperature: 25 °C, supply: { positive: 15 V, negative: -15 V } }
@@ -23,14 +23,14 @@ public sealed class PeakingAboveLimitRuleTests
     [Fact]
     public void Accepts_the_Butterworth_compensation()
     {
-        // REFERENCE §3.2: Cf = 1.7841 pF gives 0 dB of peaking.
+        // references.md §3.2: Cf = 1.7841 pF gives 0 dB of peaking.
         Lint.Check(WorkedExample("1.7841 pF")).Clean(Id);
     }
 
     [Fact]
     public void Flags_the_peaking_of_the_45_degree_capacitor_above_the_default_1_dB()
     {
-        // REFERENCE §3.2: Cf45 = 1.2616 pF peaks 1.213 dB on the exact model.
+        // references.md §3.2: Cf45 = 1.2616 pF peaks 1.213 dB on the exact model.
         var f = Lint.Check(WorkedExample("[|1.2616 pF|]")).SingleAtMark(Id, Severity.Warning);
 
         Assert.Equal("/feedback/capacitance", f.Pointer);

@@ -29,7 +29,7 @@ public sealed class RfThermalNoiseDominatesRuleTests
     [InlineData(0.99, true)]
     public void Draws_the_line_at_Imin_times_Rf_equal_to_2kT_over_q_at_the_hottest_temperature(double factor, bool flagged)
     {
-        // Imin·Rf = 2kT/q at 60 °C, with CODATA k and q (REFERENCE §1 row 11 and [C]).
+        // Imin·Rf = 2kT/q at 60 °C, with CODATA k and q (references.md §1 row 11 and [C]).
         var boundary = Reference.TwoKtOverQ(Hottest) / 1e6;
 
         var r = Lint.Check(Channel(Nanoamps(boundary * factor)));
@@ -88,7 +88,7 @@ public sealed class RfThermalNoiseDominatesRuleTests
 
         r.ApplyFixAndRecheck(f);
 
-        // Independent: Rf ≥ (2kT/q)/Imin at 25 °C = 51.4 MΩ, snapped up to E96 (REFERENCE §3.4); 5 nA·R fits in 5 V.
+        // Independent: Rf ≥ (2kT/q)/Imin at 25 °C = 51.4 MΩ, snapped up to E96 (references.md §3.4); 5 nA·R fits in 5 V.
         var expected = Reference.AtOrAbove(Reference.E96, Reference.TwoKtOverQ(298.15) / 1e-9);
         Reference.AssertClose(expected, QuantityParser.Parse(f.Fix!.Value, Dimension.Resistance).Typ);
     }

@@ -21,7 +21,7 @@ public sealed class ToleranceCornerFailsRuleTests
           dielectric: {{dielectric}}
         """;
 
-    // EIA-198 class codes (REFERENCE §3.6, from memory): C0G/NP0 are class 1, X7R/X5R/Y5V class 2.
+    // EIA-198 class codes (references.md §3.6, from memory): C0G/NP0 are class 1, X7R/X5R/Y5V class 2.
     [Theory]
     [InlineData("C0G")]
     [InlineData("NP0")]

@@ -12,7 +12,7 @@ namespace SpecLint.Rules.Tests;
 /// </summary>
 public sealed class ToleranceCornerRuleTests
 {
-    // REFERENCE §3.2's worked example (Cin = 100 pF, Rf = 1 MΩ, GBW = 10 MHz) with real-world spreads:
+    // references.md §3.2's worked example (Cin = 100 pF, Rf = 1 MΩ, GBW = 10 MHz) with real-world spreads:
     // GBW ±30 % (common practice for op-amp lots), sensor ±10 %, and a small Cf with an absolute ±0.25 pF.
     private static string Channel(string cf, string requirements = "") => $$"""
         {{Parts.Header}}
@@ -94,7 +94,7 @@ public sealed class ToleranceCornerRuleTests
     [Fact]
     public void A_comfortable_design_is_clean_at_every_corner()
     {
-        // 2.7 pF: twice the "45°" Cf of REFERENCE §3.2, critically damped or better at every vertex.
+        // 2.7 pF: twice the "45°" Cf of references.md §3.2, critically damped or better at every vertex.
         Assert.True(BruteForceMinimumPhaseMarginDeg(2.7e-12, 0.25e-12) > 45);
         var r = Lint.CheckWithCorners(Channel("2.7 pF ±0.25 pF"));
         r.Clean("phase-margin");
@@ -105,7 +105,7 @@ public sealed class ToleranceCornerRuleTests
     [Fact]
     public void Bandwidth_is_judged_at_the_slowest_corner()
     {
-        // With Cf = 1.8 pF the nominal bandwidth is 125 kHz (REFERENCE §3.2: √2·Cf45 gives 125.04 kHz with 1.784 pF);
+        // With Cf = 1.8 pF the nominal bandwidth is 125 kHz (references.md §3.2: √2·Cf45 gives 125.04 kHz with 1.784 pF);
         // the low-GBW, high-Cf corner is slower than 110 kHz.
         var r = Lint.CheckWithCorners(Channel("1.8 pF ±0.25 pF", "requirements: { bandwidth: [|110 kHz|] }"));
         var nominal = r.Outcome.Analysis!.Bandwidth!.Value.Hertz;

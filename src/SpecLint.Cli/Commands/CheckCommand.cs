@@ -11,7 +11,7 @@ internal static class CheckCommand
     public static Command Create()
     {
         var paths = new Argument<string[]>("paths") { Description = "Spec files or folders (default: the repository, per .speclint.yaml)", Arity = ArgumentArity.ZeroOrMore };
-        var format = new Option<string>("--format") { Description = "Terminal output: text, json (DESIGN §5) or github (workflow annotations)", DefaultValueFactory = _ => DefaultFormat() };
+        var format = new Option<string>("--format") { Description = "Terminal output: text, json (metrics and findings for scripts, format version 1) or github (workflow annotations)", DefaultValueFactory = _ => DefaultFormat() };
         format.AcceptOnlyFromAmong("text", "json", "github");
         var report = new Option<string?>("--report") { Description = "Write a Markdown review report to this file (SVG plots in a folder beside it)" };
         var html = new Option<string?>("--html") { Description = "Write the report as one standalone HTML page with the plots inline" };
@@ -22,9 +22,10 @@ internal static class CheckCommand
         var asOf = new Option<string?>("--as-of") { Description = "Judge waiver expiry dates as of this day (YYYY-MM-DD; default today)" };
         var nominal = new Option<bool>("--nominal-only") { Description = "Skip tolerance corners and Monte Carlo" };
         var quiet = new Option<bool>("--quiet") { Description = "No progress on stderr" };
+        var noHouseRules = new Option<bool>("--no-house-rules") { Description = "Do not compile or run the repository's house rules (for pull requests from untrusted forks)" };
         var command = new Command("check", "Check spec files: schema, analysis, rules. Exit 0 pass, 1 findings at the fail level, 2 unusable input")
         {
-            paths, format, report, html, sarif, failOn, config, asOf, nominal, quiet,
+            paths, format, report, html, sarif, failOn, config, asOf, nominal, quiet, noHouseRules,
         };
         command.SetAction(parse =>
         {
@@ -63,6 +64,7 @@ internal static class CheckCommand
                 FailOn = parse.GetValue(failOn) is null ? null : fail,
                 Tolerances = !parse.GetValue(nominal),
                 Progress = Progress.For(error, parse.GetValue(quiet)),
+                HouseRules = parse.GetValue(noHouseRules) ? null : HouseRuleSources.Create(),
             };
             var run = CheckRunner.Run(options);
             return Outputs.Write(run, request, output, error);

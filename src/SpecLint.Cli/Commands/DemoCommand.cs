@@ -51,7 +51,15 @@ internal static class DemoCommand
                     AtomicFile.WriteAllText(Path.Combine(specs, name), text);
                 }
 
-                run = CheckRunner.Run(new CheckOptions { Paths = [specs] });
+                var ruleFolder = Path.Combine(folder, "house-rules", DemoHouseRuleId);
+                AtomicFile.CreateFolder(folder, ruleFolder);
+                foreach (var (name, text) in Resources("SpecLint.Cli.DemoHouseRule."))
+                {
+                    AtomicFile.WriteAllText(Path.Combine(ruleFolder, name), text);
+                }
+
+                AtomicFile.WriteAllText(Path.Combine(folder, ".speclint.yaml"), DemoConfig);
+                run = CheckRunner.Run(new CheckOptions { Paths = [specs], HouseRules = HouseRuleSources.Create() });
                 Outputs.WriteMarkdown(run, report, title);
                 Outputs.WriteHtml(run, Path.Combine(folder, "report.html"), title);
             }
@@ -65,17 +73,31 @@ internal static class DemoCommand
             output.WriteLine();
             output.WriteLine($"Demo report: {report} (plots in {Path.Combine(folder, "report-plots")}; one-page HTML: {Path.Combine(folder, "report.html")})");
             output.WriteLine("These channels are invented examples; some are clean and some carry deliberate design mistakes.");
+            output.WriteLine($"'{DemoHouseRuleId}' is a house rule: a C# class in {Path.Combine(folder, "house-rules", DemoHouseRuleId)}, compiled and run at check time like the built-in rules.");
             output.WriteLine($"'speclint check {specs}' gives the same findings with the exit code CI would see ({run.ExitCode}).");
             return ExitCodes.Clean;
         });
         return command;
     }
 
+    private const string DemoHouseRuleId = "build-spread";
+
+    // The buoy team's configuration: one house rule of its own, with a tighter setting than its default.
+    private const string DemoConfig = """
+        # The demo team's SpecLint configuration: its own rule in house-rules/ (a C# class and its page),
+        # compiled and run by 'speclint check' beside the built-in rules.
+        house-rules: [house-rules/]
+        rules:
+          build-spread: { max-drop: 6 deg }
+
+        """;
+
     /// <summary>The embedded demo specs, by file name, in a stable order.</summary>
-    public static IEnumerable<(string Name, string Text)> DemoSpecs()
+    public static IEnumerable<(string Name, string Text)> DemoSpecs() => Resources("SpecLint.Cli.Demo.");
+
+    private static IEnumerable<(string Name, string Text)> Resources(string prefix)
     {
         var asm = Assembly.GetExecutingAssembly();
-        const string prefix = "SpecLint.Cli.Demo.";
         foreach (var resource in asm.GetManifestResourceNames().Where(n => n.StartsWith(prefix, StringComparison.Ordinal)).Order(StringComparer.Ordinal))
         {
             using var stream = asm.GetManifestResourceStream(resource)!;

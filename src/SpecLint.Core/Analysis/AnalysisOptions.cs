@@ -17,7 +17,7 @@ public sealed record AnalysisOptions
     /// <summary>Low end of the noise band; null for the default, 1 Hz.</summary>
     public Frequency? NoiseBandLow { get; init; }
 
-    /// <summary>High end of the noise band; null for the default, 10·f−3dB (REFERENCE §4 item 8: state the band).</summary>
+    /// <summary>High end of the noise band; null for the default, 10·f−3dB (references.md §4 item 8: state the band).</summary>
     public Frequency? NoiseBandHigh { get; init; }
 
     /// <summary>Temperature of the thermal-noise terms and of 2kT/q; null for the circuit's own temperature.</summary>

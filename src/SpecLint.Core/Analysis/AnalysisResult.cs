@@ -3,7 +3,7 @@ using SpecLint.Core.Units;
 
 namespace SpecLint.Core.Analysis;
 
-/// <summary>The figures of one operating point (DESIGN §4, §5). Absent values are null, never 0.</summary>
+/// <summary>The figures of one operating point (references.md §D4, §5). Absent values are null, never 0.</summary>
 /// <param name="Circuit">The operating point analysed.</param>
 /// <param name="Transimpedance">|Zt(0)| with the finite A0 (the output moves by pol·|Zt(0)|·I, see <see cref="Circuit.Polarity"/>).</param>
 /// <param name="LoopGainDc">T(0) = A0·Rsh/(Rsh + Rf).</param>

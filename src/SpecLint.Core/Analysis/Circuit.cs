@@ -9,7 +9,7 @@ namespace SpecLint.Core.Analysis;
 /// <c>with</c> expressions, e.g. <c>nominal with { Cf = nominal.Cf * 1.1 }</c>.
 /// </summary>
 /// <remarks>
-/// The model is DESIGN §4 / REFERENCE §1: single- or two-pole op-amp, + input at AC ground, sensor =
+/// The model is references.md §D4 / references.md §1: single- or two-pole op-amp, + input at AC ground, sensor =
 /// current source ∥ Cd ∥ Rsh with its far terminal at <see cref="Vbias"/>, Cf + Cpar across Rf.
 /// </remarks>
 public sealed record Circuit
@@ -26,7 +26,7 @@ public sealed record Circuit
     /// <summary>Sensor capacitance at its operating bias.</summary>
     public Capacitance SensorCapacitance { get; init; } = Capacitance.Zero;
 
-    /// <summary>Op-amp common-mode input capacitance (counted at the − input, REFERENCE §4 item 16).</summary>
+    /// <summary>Op-amp common-mode input capacitance (counted at the − input, references.md §4 item 16).</summary>
     public Capacitance CommonModeCapacitance { get; init; } = Capacitance.Zero;
 
     /// <summary>Op-amp differential input capacitance (to AC ground, since the + input is at AC ground).</summary>
@@ -89,7 +89,7 @@ public sealed record Circuit
     /// <summary>Closest approach of the output to the negative rail.</summary>
     public Voltage SwingToNegative { get; init; } = Voltage.Zero;
 
-    /// <summary>Signal current orientation at the summing node (DESIGN §3).</summary>
+    /// <summary>Signal current orientation at the summing node (references.md §D3).</summary>
     public CurrentDirection Direction { get; init; } = CurrentDirection.OutOfNode;
 
     /// <summary>Temperature of the resistors' thermal noise and of kT/q.</summary>

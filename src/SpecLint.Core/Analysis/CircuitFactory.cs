@@ -7,7 +7,7 @@ namespace SpecLint.Core.Analysis;
 public static class CircuitFactory
 {
     /// <summary>
-    /// The nominal operating point (DESIGN §5): typical values at <see cref="Conditions.Nominal"/>, with the
+    /// The nominal operating point (references.md §D5): typical values at <see cref="Conditions.Nominal"/>, with the
     /// offset voltage and bias current at their largest magnitude (see <see cref="TypicalPicker"/>).
     /// Noise metrics are computed at <see cref="Conditions.Hottest"/> by <see cref="TiaAnalyzer.Analyze(TiaSpec)"/>.
     /// </summary>

@@ -12,7 +12,7 @@ public static class DesignHelpers
     /// The smallest feedback capacitor Cf (added to the circuit's Cpar) whose exact-model phase margin reaches
     /// <paramref name="target"/>, i.e. the widest-band design that meets it. Solved with Brent's method in ln Cf
     /// after a log scan over 10⁻⁴ … 10⁴ × √(Cin/(2π·Rf·GBW)) brackets the first Cf that is good enough; not
-    /// the asymptotic "45°" formula, which misses by about 7° (REFERENCE §3.2).
+    /// the asymptotic "45°" formula, which misses by about 7° (references.md §3.2).
     /// </summary>
     /// <param name="circuit">The operating point; its Cf is replaced.</param>
     /// <param name="target">The phase margin wanted.</param>
@@ -55,7 +55,7 @@ public static class DesignHelpers
 
     /// <summary>
     /// The largest Rf for which the DC output, from zero signal to full scale with the offset and bias-current
-    /// errors at their worst signs (REFERENCE §1 row 12, ideal form), stays <paramref name="margin"/> inside the
+    /// errors at their worst signs (references.md §1 row 12, ideal form), stays <paramref name="margin"/> inside the
     /// op-amp's swing limits. Closed form: each limit is linear in Rf.
     /// </summary>
     /// <param name="circuit">The operating point (its rails, swing, currents, Vos, Ib, Rsh; Rf is ignored).</param>
@@ -88,7 +88,7 @@ public static class DesignHelpers
 
     /// <summary>
     /// The smallest Rf for which the shot noise of <paramref name="imin"/> is at least Rf's thermal noise:
-    /// 2q·Imin ≥ 4kT/Rf ⇔ Rf ≥ 2kT/(q·Imin) (REFERENCE §1 row 11; evaluate at the hottest temperature).
+    /// 2q·Imin ≥ 4kT/Rf ⇔ Rf ≥ 2kT/(q·Imin) (references.md §1 row 11; evaluate at the hottest temperature).
     /// </summary>
     /// <param name="imin">The smallest signal current.</param>
     /// <param name="hottest">The highest operating temperature.</param>

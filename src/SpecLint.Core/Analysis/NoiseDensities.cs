@@ -4,7 +4,7 @@ namespace SpecLint.Core.Analysis;
 
 /// <summary>
 /// Output noise power spectral densities of each source at one frequency, in V²/Hz (they add in power,
-/// REFERENCE §4 item 17). Use <see cref="Density"/> for V/√Hz.
+/// references.md §4 item 17). Use <see cref="Density"/> for V/√Hz.
 /// </summary>
 /// <param name="RfThermal">4kT/Rf through |Zt|².</param>
 /// <param name="RshThermal">4kT/Rsh through |Zt|² (zero when Rsh is infinite).</param>

@@ -9,7 +9,7 @@ namespace SpecLint.Core.Analysis;
 /// <param name="Temperature">Temperature of the thermal-noise terms (the hottest in the spec for nominal metrics).</param>
 /// <param name="Output">Output rms noise per source.</param>
 /// <param name="OutputRms">Total output rms noise over the band.</param>
-/// <param name="InputRms">Input-referred rms current, output rms / |Zt(0)| (REFERENCE §1 row 10).</param>
+/// <param name="InputRms">Input-referred rms current, output rms / |Zt(0)| (references.md §1 row 10).</param>
 /// <param name="SnrAtMinimumDb">20·log10(Imin·|Zt(0)| / output rms); null when Imin is zero.</param>
 /// <param name="NoiseEquivalentPower">Input-referred rms current / responsivity, the rms optical power over the band; null without a responsivity.</param>
 /// <param name="SpotFrequency">Frequency of <see cref="SpotDensities"/>: the geometric middle of the band.</param>

@@ -4,7 +4,7 @@ namespace SpecLint.Core.Analysis;
 
 /// <summary>
 /// The DC output from zero signal (dark current alone) to full scale (<c>Imax + Idark</c>), widened by the
-/// offset and bias-current errors at their worst signs (REFERENCE §1 row 12), and the range the op-amp can drive.
+/// offset and bias-current errors at their worst signs (references.md §1 row 12), and the range the op-amp can drive.
 /// </summary>
 /// <param name="Idle">Ideal output with dark current only, Vbias + pol·Idark·Rf.</param>
 /// <param name="FullScale">Ideal output at full scale, Vbias + pol·(Imax + Idark)·Rf.</param>

@@ -1,6 +1,6 @@
 namespace SpecLint.Core.Analysis;
 
-/// <summary>JSON Pointers of the spec keys an <see cref="ISpreadPicker"/> is asked about (DESIGN §3 key names).</summary>
+/// <summary>JSON Pointers of the spec keys an <see cref="ISpreadPicker"/> is asked about (references.md §D3 key names).</summary>
 public static class SpecPointers
 {
     /// <summary>Feedback resistance.</summary>

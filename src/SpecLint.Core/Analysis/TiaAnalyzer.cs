@@ -6,12 +6,12 @@ using SpecLint.Core.Units;
 namespace SpecLint.Core.Analysis;
 
 /// <summary>
-/// Computes the figures of a TIA operating point (DESIGN §4) from the exact model <see cref="TiaModel"/>.
+/// Computes the figures of a TIA operating point (references.md §D4) from the exact model <see cref="TiaModel"/>.
 /// </summary>
 /// <remarks>
 /// Method: a log-spaced scan over 10⁻³·(lowest) .. 10³·(highest) characteristic frequency brackets every
 /// |T| = 1 crossing and the −3 dB fall, and MathNet's Brent solver refines each bracket to 1e-12 in ln f.
-/// The phase comes from summed pole and zero angles, so it is unwrapped from DC by construction (REFERENCE
+/// The phase comes from summed pole and zero angles, so it is unwrapped from DC by construction (docs/references.md
 /// §4 item 3). The peak is refined by golden-section search around the largest scan sample.
 /// </remarks>
 public static class TiaAnalyzer
@@ -22,7 +22,7 @@ public static class TiaAnalyzer
     private const int MaxScanPoints = 100_000;
 
     /// <summary>
-    /// Nominal analysis of a spec (DESIGN §5): small-signal and DC figures at the nominal temperature, noise
+    /// Nominal analysis of a spec (references.md §D5): small-signal and DC figures at the nominal temperature, noise
     /// at the hottest, integrated over <c>requirements.noise.band</c> when given, else the default band.
     /// </summary>
     /// <param name="spec">The spec.</param>
@@ -91,7 +91,7 @@ public static class TiaAnalyzer
     }
 
     /// <summary>
-    /// The exact DC output with finite A0 (REFERENCE §2 notes), for a signal current leaving the node
+    /// The exact DC output with finite A0 (references.md §2 notes), for a signal current leaving the node
     /// (<paramref name="outOfNodeAmperes"/>, dark current included) and given offset and bias current.
     /// </summary>
     /// <remarks>
@@ -289,7 +289,7 @@ public static class TiaAnalyzer
         var c = model.Circuit;
         var isDefault = options.NoiseBandLow is null || options.NoiseBandHigh is null;
         var fLo = options.NoiseBandLow?.Hertz ?? 1.0;
-        // Default upper end 10·f−3dB (REFERENCE §4 item 8); without a bandwidth fall back on 10·GBW.
+        // Default upper end 10·f−3dB (references.md §4 item 8); without a bandwidth fall back on 10·GBW.
         var fHi = options.NoiseBandHigh?.Hertz ?? (10 * (scan.BandwidthHz ?? c.Gbw.Hertz));
         if (!(fLo > 0) || !(fHi > fLo))
         {

@@ -4,7 +4,7 @@ using SpecLint.Core.Units;
 namespace SpecLint.Core.Analysis;
 
 /// <summary>
-/// The small-signal and noise model of one <see cref="Circuit"/> (REFERENCE §1 rows 1–9), evaluated at
+/// The small-signal and noise model of one <see cref="Circuit"/> (references.md §1 rows 1–9), evaluated at
 /// any frequency. Built once per operating point; every evaluation is a few dozen flops and allocates
 /// nothing, so reports can sweep it for Bode and noise-density plots.
 /// </summary>
@@ -112,7 +112,7 @@ public sealed class TiaModel
 
     /// <summary>
     /// Closed-loop transimpedance Zt(jω) = Zf·T/(1 + T), in ohms; real and positive at DC.
-    /// Vout = Vbias − Zt·I for a current I into the inverting node (REFERENCE §1 row 6).
+    /// Vout = Vbias − Zt·I for a current I into the inverting node (references.md §1 row 6).
     /// </summary>
     /// <param name="frequency">The frequency.</param>
     public Complex Transimpedance(Frequency frequency) => TransimpedanceAt(TwoPi * frequency.Hertz);

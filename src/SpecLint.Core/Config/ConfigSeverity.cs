@@ -1,7 +1,7 @@
 namespace SpecLint.Core.Config;
 
 /// <summary>A severity as written in <c>.speclint.yaml</c> (SARIF's levels, plus off for a rule).</summary>
-public enum ConfigSeverity
+internal enum ConfigSeverity
 {
     /// <summary>The rule does not run.</summary>
     Off,

@@ -10,7 +10,7 @@ using SpecLint.Core.Spec.Yaml;
 namespace SpecLint.Core.Config;
 
 /// <summary>Finds and reads <c>.speclint.yaml</c> with the same YAML hardening and schema checks as spec files.</summary>
-public static class RepoConfigLoader
+internal static class RepoConfigLoader
 {
     /// <summary>
     /// The nearest <c>.speclint.yaml</c> at or above the spec's folder, or null. The walk stops at the filesystem
@@ -127,11 +127,14 @@ public static class RepoConfigLoader
                 }
 
                 ConfigSeverity? severity = entry["severity"] is JsonValue sv && Ok(at + "/severity", sink) ? ParseSeverity(sv.GetValue<string>()) : null;
+                ImmutableArray<string> tags = entry["tags"] is JsonArray tagList && Ok(at + "/tags", sink)
+                    ? [.. tagList.Select(n => n!.GetValue<string>())]
+                    : [];
                 var options = ImmutableDictionary.CreateBuilder<string, RuleOption>(StringComparer.Ordinal);
                 foreach (var (key, value) in entry)
                 {
                     var optionAt = JsonPointerText.Append(at, key);
-                    if (key == "severity" || !Ok(optionAt, sink))
+                    if (key is "severity" or "tags" || !Ok(optionAt, sink))
                     {
                         continue;
                     }
@@ -140,11 +143,31 @@ public static class RepoConfigLoader
                     options[key] = new RuleOption(key, value?.DeepClone(), raw, tree.Positions.GetValueOrDefault(optionAt, SourcePosition.FileStart));
                 }
 
-                rules[id] = new RuleSettings(id, severity, options.ToImmutable(), tree.Positions.GetValueOrDefault(at, SourcePosition.FileStart));
+                rules[id] = new RuleSettings(id, severity, options.ToImmutable(), tree.Positions.GetValueOrDefault(at, SourcePosition.FileStart)) { Tags = tags };
             }
         }
 
-        var config = new RepoConfig(path, include, failOn, mc, rules.ToImmutable(), tree.ToSourceMap());
+        ImmutableArray<string> houseRules = Ok("/house-rules", sink) && obj["house-rules"] is JsonArray hr
+            ? [.. hr.Select(n => n!.GetValue<string>())]
+            : [];
+        var budget = d.HouseRuleBudget;
+        if (obj["house-rule-budget"] is JsonValue b && Ok("/house-rule-budget", sink))
+        {
+            if (DurationText.TryParse(b.GetValue<string>(), out var parsed, out var why))
+            {
+                budget = parsed;
+            }
+            else
+            {
+                sink.AtValue("/house-rule-budget", "house-rule-budget: " + why);
+            }
+        }
+
+        var config = new RepoConfig(path, include, failOn, mc, rules.ToImmutable(), tree.ToSourceMap())
+        {
+            HouseRules = houseRules,
+            HouseRuleBudget = budget,
+        };
         return new RepoConfigLoadResult(config, sink.ToImmutable());
     }
 

@@ -10,7 +10,7 @@ namespace SpecLint.Core.Config;
 /// <param name="Value">The value as JSON (text, number or boolean).</param>
 /// <param name="RawText">The scalar exactly as written, for the unit parser.</param>
 /// <param name="Position">Where the value sits in <c>.speclint.yaml</c>.</param>
-public sealed record RuleOption(string Name, JsonNode? Value, string RawText, SourcePosition Position)
+internal sealed record RuleOption(string Name, JsonNode? Value, string RawText, SourcePosition Position)
 {
     /// <summary>Parses the option as a quantity of <paramref name="dimension"/>; false with a message when it is not one.</summary>
     public bool TryGetQuantity(Dimension dimension, out ParsedQuantity? value, out string? error) =>

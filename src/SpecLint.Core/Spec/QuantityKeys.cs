@@ -4,7 +4,7 @@ using SpecLint.Core.Units;
 
 namespace SpecLint.Core.Spec;
 
-/// <summary>The dimension of every quantity key of DESIGN §3, by JSON Pointer (map entries min/typ/max share their key's).</summary>
+/// <summary>The dimension of every quantity key of references.md §D3, by JSON Pointer (map entries min/typ/max share their key's).</summary>
 internal static class QuantityKeys
 {
     private static readonly FrozenDictionary<string, Dimension> Keys = new Dictionary<string, Dimension>

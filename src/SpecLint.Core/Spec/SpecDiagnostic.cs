@@ -10,7 +10,7 @@ namespace SpecLint.Core.Spec;
 /// <param name="RuleId"><c>spec-invalid</c> for spec files, <c>config-invalid</c> for <c>.speclint.yaml</c>.</param>
 /// <param name="Pointer">JSON Pointer of the key concerned ("" for the whole file).</param>
 /// <param name="Message">Plain-English message with an example of the fix.</param>
-public sealed record SpecDiagnostic(string File, int Line, int Column, string RuleId, string Pointer, string Message)
+internal sealed record SpecDiagnostic(string File, int Line, int Column, string RuleId, string Pointer, string Message)
 {
     /// <summary>The rule id of problems in spec files.</summary>
     public const string SpecInvalid = "spec-invalid";

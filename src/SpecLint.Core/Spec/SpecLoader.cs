@@ -10,7 +10,7 @@ namespace SpecLint.Core.Spec;
 /// → <see cref="Model.TiaSpec"/>. Every problem in the file is collected and reported at its line and column;
 /// nothing here throws for bad input.
 /// </summary>
-public static class SpecLoader
+internal static class SpecLoader
 {
     /// <summary>Reads and loads a spec file; <paramref name="displayPath"/> is the path messages show (default: <paramref name="path"/>).</summary>
     public static SpecLoadResult LoadFile(string path, string? displayPath = null)

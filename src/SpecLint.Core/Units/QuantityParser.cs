@@ -4,7 +4,7 @@ using System.Text.RegularExpressions;
 namespace SpecLint.Core.Units;
 
 /// <summary>
-/// Parses the quantity grammar of DESIGN §3: a number, optional space, optional SI prefix and a unit;
+/// Parses the quantity grammar of references.md §D3: a number, optional space, optional SI prefix and a unit;
 /// an optional tolerance (±5 %, ±0.25 pF, +10 %/-20 %, IEC 60062 letter code); or a range a .. b.
 /// Also IEC 60062 RKM codes (4k7, 2p2, R47, 470R) for resistance and capacitance.
 /// </summary>
@@ -207,7 +207,7 @@ public static partial class QuantityParser
         }
 
         var letter = ToleranceLetterCodes.Find(code)
-            ?? throw new QuantityParseException($"\"{text}\": '{code}' is not an IEC 60062 tolerance letter; use one of {ToleranceLetterCodes.KnownLetters} or write e.g. \"±5%\"");
+            ?? throw new QuantityParseException($"\"{text}\": '{code}' is not a tolerance letter SpecLint reads; use one of {ToleranceLetterCodes.KnownLetters} or write e.g. \"±5%\"");
 
         var (minus, plus, _) = letter.Deviation(typ, dimension);
         if (double.IsNaN(minus))

@@ -2,7 +2,7 @@ namespace SpecLint.Core.Units;
 
 /// <summary>
 /// One IEC 60062 tolerance letter. For capacitors the letters B, C, D, F and G are absolute below
-/// 10 pF (REFERENCE §3.5, from memory: IEC 60062:2016 not consulted).
+/// 10 pF (references.md §3.5, from memory: IEC 60062:2016 not consulted).
 /// </summary>
 /// <param name="Letter">The code letter.</param>
 /// <param name="MinusPercent">Relative tolerance below the nominal, in percent.</param>

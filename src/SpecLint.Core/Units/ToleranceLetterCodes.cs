@@ -1,6 +1,6 @@
 namespace SpecLint.Core.Units;
 
-/// <summary>The IEC 60062 tolerance letters SpecLint knows (REFERENCE §3.5, from memory).</summary>
+/// <summary>The IEC 60062 tolerance letters SpecLint knows (references.md §3.5, from memory).</summary>
 public static class ToleranceLetterCodes
 {
     private static readonly ToleranceLetterCode[] Codes =

@@ -2,7 +2,7 @@ using System.Collections.Frozen;
 
 namespace SpecLint.Core.Units;
 
-/// <summary>The unit symbols and SI prefixes of the spec grammar (DESIGN §3).</summary>
+/// <summary>The unit symbols and SI prefixes of the spec grammar (references.md §D3).</summary>
 public static class UnitTable
 {
     /// <summary>SI prefixes and their powers of ten. Both micro signs are accepted, and "u" for keyboards without one.</summary>

@@ -5,7 +5,7 @@ namespace SpecLint.Reporting.Annotations;
 /// <param name="Warnings">Lines printed as <c>::warning</c>.</param>
 /// <param name="Notices">Lines printed as <c>::notice</c>.</param>
 /// <param name="Waived">Waived findings, not annotated.</param>
-public sealed record AnnotationCounts(int Errors, int Warnings, int Notices, int Waived)
+internal sealed record AnnotationCounts(int Errors, int Warnings, int Notices, int Waived)
 {
     /// <summary>True when GitHub will show only some of the errors or warnings (10 of each per step).</summary>
     public bool OverGitHubLimit => Errors > GitHubAnnotations.ErrorLimitPerStep || Warnings > GitHubAnnotations.WarningLimitPerStep;

@@ -16,7 +16,7 @@ namespace SpecLint.Reporting.Annotations;
 /// serious first, because the raw log is still complete; when the limit is passed a plain note says where to find
 /// the rest (the job summary and the log).</para>
 /// </remarks>
-public static class GitHubAnnotations
+internal static class GitHubAnnotations
 {
     /// <summary>Error annotations GitHub shows per step.</summary>
     public const int ErrorLimitPerStep = 10;

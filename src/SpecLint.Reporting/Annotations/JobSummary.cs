@@ -8,7 +8,7 @@ namespace SpecLint.Reporting.Annotations;
 /// step summary over 1 MiB (the upload fails with an error annotation), so an oversized summary is cut at a line
 /// boundary, an open code fence is closed, and a note says what was left out.
 /// </summary>
-public sealed class JobSummary
+internal sealed class JobSummary
 {
     /// <summary>GitHub's limit for one step's summary file.</summary>
     public const long MaxBytesPerStep = 1024 * 1024;

@@ -9,7 +9,7 @@ namespace SpecLint.Reporting.Html;
 /// The Markdown report rendered with Markdig as one standalone page: styles embedded, every chart inlined as
 /// SVG, so a reviewer can open it straight from a CI artifact with no other files.
 /// </summary>
-public static partial class HtmlReport
+internal static partial class HtmlReport
 {
     // Raw HTML in the Markdown is shown as text: every user string reaches the page escaped, never as markup.
     private static readonly MarkdownPipeline Pipeline = new MarkdownPipelineBuilder().UseAdvancedExtensions().DisableHtml().Build();

@@ -3,7 +3,7 @@ using SpecLint.Rules.Checking;
 
 namespace SpecLint.Reporting.Json;
 
-/// <summary>The <c>corners</c> and <c>monteCarlo</c> members of a spec in the JSON output (DESIGN §5).</summary>
+/// <summary>The <c>corners</c> and <c>monteCarlo</c> members of a spec in the JSON output (references.md §D5).</summary>
 internal static class CornersJson
 {
     public static void Write(Utf8JsonWriter w, SpecOutcome spec)

@@ -8,10 +8,10 @@ using SpecLint.Rules.Engine;
 namespace SpecLint.Reporting.Json;
 
 /// <summary>
-/// The machine-readable output of DESIGN §5. Field names are a contract: extend, never rename. Written
+/// The machine-readable output of references.md §D5. Field names are a contract: extend, never rename. Written
 /// with a forward-only writer so key order and number formatting are identical on every run.
 /// </summary>
-public static class JsonReport
+internal static class JsonReport
 {
     /// <summary>The JSON document for a run, indented, with a trailing newline.</summary>
     public static string Write(CheckRun run)

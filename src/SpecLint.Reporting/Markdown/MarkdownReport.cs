@@ -10,7 +10,7 @@ namespace SpecLint.Reporting.Markdown;
 /// The review report: run context, a summary table of every spec, findings grouped by spec with links to
 /// their lines, waived findings, and per-spec metrics. Deterministic: no wall-clock time unless asked.
 /// </summary>
-public sealed class MarkdownReport
+internal sealed class MarkdownReport
 {
     private readonly CheckRun _run;
     private readonly string _reportDirectory;

@@ -1,7 +1,7 @@
 namespace SpecLint.Reporting.Plots;
 
 /// <summary>How an axis maps values to positions.</summary>
-public enum AxisScale
+internal enum AxisScale
 {
     /// <summary>Equal steps of value are equal distances (dB, degrees, volts).</summary>
     Linear,

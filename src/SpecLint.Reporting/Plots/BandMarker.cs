@@ -4,4 +4,4 @@ namespace SpecLint.Reporting.Plots;
 /// <param name="FromX">Lower end (SI).</param>
 /// <param name="ToX">Upper end (SI).</param>
 /// <param name="Label">Text at the top of the band.</param>
-public sealed record BandMarker(double FromX, double ToX, string Label);
+internal sealed record BandMarker(double FromX, double ToX, string Label);

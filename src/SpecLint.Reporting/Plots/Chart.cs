@@ -8,7 +8,7 @@ namespace SpecLint.Reporting.Plots;
 /// <param name="XAxis">The x-axis shared by all panels.</param>
 /// <param name="Panels">Plot areas from top to bottom (at least one).</param>
 /// <param name="Series">Curves; each names its panel.</param>
-public sealed record Chart(string Title, ChartAxis XAxis, IReadOnlyList<ChartPanel> Panels, IReadOnlyList<ChartSeries> Series)
+internal sealed record Chart(string Title, ChartAxis XAxis, IReadOnlyList<ChartPanel> Panels, IReadOnlyList<ChartSeries> Series)
 {
     /// <summary>Smaller grey text after the title, e.g. why a marker is missing.</summary>
     public string? Subtitle { get; init; }

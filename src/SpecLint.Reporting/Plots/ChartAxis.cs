@@ -4,7 +4,7 @@ namespace SpecLint.Reporting.Plots;
 /// <param name="Title">Axis title, e.g. "frequency" or "|T| (dB)".</param>
 /// <param name="Scale">Linear or logarithmic.</param>
 /// <param name="Unit">How tick values are written.</param>
-public sealed record ChartAxis(string Title, AxisScale Scale, TickUnit Unit)
+internal sealed record ChartAxis(string Title, AxisScale Scale, TickUnit Unit)
 {
     /// <summary>Lower end; null to fit the data (rounded out to a tick or a decade).</summary>
     public double? Min { get; init; }

@@ -5,7 +5,7 @@ namespace SpecLint.Reporting.Plots;
 /// the common forms of colour blindness; each also gets its own dash pattern so a greyscale print still
 /// tells them apart. The light members (sand, pale cyan) are left out: thin lines in them vanish on white.
 /// </summary>
-public static class ChartPalette
+internal static class ChartPalette
 {
     private static readonly string[] Colors = ["#332288", "#44AA99", "#CC6677", "#999933", "#882255", "#6699CC", "#AA4499", "#117733"];
     private static readonly string?[] Dashes = [null, "8 4", "2 3", "10 3 2 3", "5 2", "1.5 2.5 6 2.5", "12 4", "3 5"];

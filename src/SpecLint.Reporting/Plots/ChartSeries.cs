@@ -9,7 +9,7 @@ namespace SpecLint.Reporting.Plots;
 /// <param name="Style">Stroke; null for the palette entry of the series' position in the chart.</param>
 /// <param name="Panel">Index of the panel (0 = top) the series is drawn in.</param>
 /// <param name="Axis">Which y-axis of the panel it uses.</param>
-public sealed record ChartSeries(
+internal sealed record ChartSeries(
     string Name,
     IReadOnlyList<(double X, double Y)> Points,
     SeriesStyle? Style = null,

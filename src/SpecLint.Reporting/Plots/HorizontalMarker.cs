@@ -5,7 +5,7 @@ namespace SpecLint.Reporting.Plots;
 /// <param name="Label">Text on the line.</param>
 /// <param name="Panel">Panel index.</param>
 /// <param name="Axis">Which y-axis of the panel <paramref name="Y"/> refers to.</param>
-public sealed record HorizontalMarker(double Y, string Label, int Panel = 0, YAxisSide Axis = YAxisSide.Left)
+internal sealed record HorizontalMarker(double Y, string Label, int Panel = 0, YAxisSide Axis = YAxisSide.Left)
 {
     /// <summary>Put the label under the line (for two references close together).</summary>
     public bool LabelBelow { get; init; }

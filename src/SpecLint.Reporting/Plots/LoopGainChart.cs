@@ -4,7 +4,7 @@ namespace SpecLint.Reporting.Plots;
 /// Loop gain T = A·β as two stacked panels on a shared frequency axis: |T| in dB above ∠T in degrees, with the
 /// 0 dB and −180° references, the crossover frequency and the phase margin marked.
 /// </summary>
-public static class LoopGainChart
+internal static class LoopGainChart
 {
     /// <summary>Builds the chart from a sweep.</summary>
     /// <param name="frequencyHz">Sweep frequencies in Hz (ascending).</param>

@@ -4,7 +4,7 @@ namespace SpecLint.Reporting.Plots;
 /// Output noise density per source and in total, log-log in V/√Hz, with the integration band shaded. The total is
 /// drawn last, thicker and near-black, so it sits on top of its sources.
 /// </summary>
-public static class NoiseDensityChart
+internal static class NoiseDensityChart
 {
     // Sources far below the total do not matter to the reader and would stretch the axis over many decades.
     private const double DecadesBelowTotal = 5;

@@ -5,7 +5,7 @@ using SpecLint.Rules.Checking;
 namespace SpecLint.Reporting.Plots;
 
 /// <summary>Writes the charts of every analysed spec beside a report and returns the Markdown that links them.</summary>
-public static class PlotFiles
+internal static class PlotFiles
 {
     /// <summary>
     /// Writes <c>&lt;folder&gt;/&lt;spec&gt;.&lt;chart&gt;.svg</c> for each spec and returns per-spec Markdown, keyed by

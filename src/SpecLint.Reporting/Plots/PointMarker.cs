@@ -8,7 +8,7 @@ namespace SpecLint.Reporting.Plots;
 /// <param name="Y">Position on the panel's left y-axis.</param>
 /// <param name="Label">Text beside the dot.</param>
 /// <param name="Panel">Panel index.</param>
-public sealed record PointMarker(double X, double Y, string Label, int Panel = 0)
+internal sealed record PointMarker(double X, double Y, string Label, int Panel = 0)
 {
     /// <summary>Start of a span drawn up (or down) to the point, or null.</summary>
     public double? FromY { get; init; }

@@ -4,4 +4,4 @@ namespace SpecLint.Reporting.Plots;
 /// <param name="Color">CSS colour, e.g. "#332288".</param>
 /// <param name="Dash">SVG stroke-dasharray, or null for a solid line.</param>
 /// <param name="Width">Stroke width in px.</param>
-public sealed record SeriesStyle(string Color, string? Dash, double Width);
+internal sealed record SeriesStyle(string Color, string? Dash, double Width);

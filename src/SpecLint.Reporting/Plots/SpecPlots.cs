@@ -8,7 +8,7 @@ namespace SpecLint.Reporting.Plots;
 /// Sweeps a spec's nominal circuit and builds its three charts: loop gain, transimpedance and output noise
 /// density by source. The sweep spans the noise band and a decade beyond the loop crossover.
 /// </summary>
-public static class SpecPlots
+internal static class SpecPlots
 {
     private const int PointsPerDecade = 40;
 

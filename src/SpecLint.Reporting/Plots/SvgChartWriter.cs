@@ -11,7 +11,7 @@ namespace SpecLint.Reporting.Plots;
 /// markers and a legend under the plot. Output is deterministic: invariant culture, one decimal for every
 /// coordinate, elements in input order.
 /// </summary>
-public static class SvgChartWriter
+internal static class SvgChartWriter
 {
     /// <summary>The font stack; generic sans-serif last so any system renders something readable.</summary>
     public const string FontFamily = "'DejaVu Sans', 'Liberation Sans', 'Helvetica Neue', Arial, sans-serif";

@@ -8,7 +8,7 @@ namespace SpecLint.Reporting.Plots;
 /// the spec grammar ("10 kHz", "10 nV/√Hz"), so plots read like the specs; logarithmic and angular units that
 /// the grammar keeps in SI (dB, degrees) get a plain number and a suffix.
 /// </summary>
-public sealed record TickUnit
+internal sealed record TickUnit
 {
     private TickUnit(Dimension? dimension, string suffix, bool spaceBeforeSuffix)
     {

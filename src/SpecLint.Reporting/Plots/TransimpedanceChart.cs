@@ -4,7 +4,7 @@ namespace SpecLint.Reporting.Plots;
 /// Closed-loop transimpedance |Zt| over frequency, with the DC value and the −3 dB level as references and the
 /// −3 dB bandwidth marked.
 /// </summary>
-public static class TransimpedanceChart
+internal static class TransimpedanceChart
 {
     /// <summary>Builds the chart from a sweep.</summary>
     /// <param name="frequencyHz">Sweep frequencies in Hz (ascending).</param>

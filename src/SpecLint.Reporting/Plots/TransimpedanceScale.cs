@@ -1,7 +1,7 @@
 namespace SpecLint.Reporting.Plots;
 
 /// <summary>How <see cref="TransimpedanceChart"/> shows |Zt|.</summary>
-public enum TransimpedanceScale
+internal enum TransimpedanceScale
 {
     /// <summary>Ohms on a logarithmic axis, labelled "1 MΩ".</summary>
     Ohms,

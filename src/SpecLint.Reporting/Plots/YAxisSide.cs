@@ -1,7 +1,7 @@
 namespace SpecLint.Reporting.Plots;
 
 /// <summary>Which y-axis of a panel a series or reference line is drawn against.</summary>
-public enum YAxisSide
+internal enum YAxisSide
 {
     /// <summary>The panel's main axis, on the left.</summary>
     Left,

@@ -6,7 +6,7 @@ namespace SpecLint.Reporting.Sarif;
 /// Descriptors for the ids the engine reports under itself (<see cref="RuleIds.EngineIds"/>): they have no rule
 /// class, but SARIF needs a driver rule for every result, and code scanning shows its text.
 /// </summary>
-public static class EngineRuleDescriptors
+internal static class EngineRuleDescriptors
 {
     /// <summary>All engine descriptors, by id.</summary>
     public static IReadOnlyDictionary<string, RuleDescriptor> All { get; } = new Dictionary<string, RuleDescriptor>(StringComparer.Ordinal)

@@ -1,14 +1,15 @@
 using System.Text.RegularExpressions;
 using Markdig;
 using Markdig.Syntax;
+using SpecLint.Rules.Engine;
 
 namespace SpecLint.Reporting.Sarif;
 
-/// <summary>Reads the parts SARIF needs out of a rule page (STYLE §2: title line, "## What it flags", …).</summary>
+/// <summary>Reads the parts SARIF needs out of a rule page (its shape is <see cref="RulePageSections"/>).</summary>
 internal static partial class RulePage
 {
-    /// <summary>The first paragraph under "## What it flags" as plain text, or null.</summary>
-    public static string? WhatItFlags(string markdown)
+    /// <summary>The first paragraph under the condition heading as plain text, or null.</summary>
+    public static string? Condition(string markdown)
     {
         var doc = Markdig.Markdown.Parse(markdown);
         var inSection = false;
@@ -16,7 +17,7 @@ internal static partial class RulePage
         {
             if (block is HeadingBlock heading)
             {
-                inSection = heading.Level == 2 && Inline(heading).Trim().Equals("What it flags", StringComparison.OrdinalIgnoreCase);
+                inSection = heading.Level == 2 && Inline(heading).Trim().Equals(RulePageSections.Condition, StringComparison.Ordinal);
                 continue;
             }
 

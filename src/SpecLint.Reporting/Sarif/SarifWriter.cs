@@ -13,7 +13,7 @@ namespace SpecLint.Reporting.Sarif;
 /// fingerprints, and waived findings as in-source suppressions. Output is deterministic: results are ordered by
 /// file, line, column and rule, and nothing depends on the clock or the culture.
 /// </summary>
-public static class SarifWriter
+internal static class SarifWriter
 {
     /// <summary>The schema URI written as <c>$schema</c>.</summary>
     public const string SchemaUri = "https://json.schemastore.org/sarif-2.1.0.json";
@@ -86,7 +86,7 @@ public static class SarifWriter
         json.WriteStartArray("rules");
         foreach (var rule in ordered)
         {
-            WriteRule(json, rule, options.RulePages.TryGetValue(rule.Id, out var page) ? page : null);
+            WriteRule(json, rule, options.RulePages.TryGetValue(rule.Id, out var page) ? page : null, options.HouseRuleSources.GetValueOrDefault(rule.Id));
         }
 
         json.WriteEndArray();
@@ -125,10 +125,10 @@ public static class SarifWriter
             : string.Join('/', path.Split('/').Select(Uri.EscapeDataString));
     }
 
-    private static void WriteRule(Utf8JsonWriter json, RuleDescriptor rule, string? page)
+    private static void WriteRule(Utf8JsonWriter json, RuleDescriptor rule, string? page, string? houseRuleSource)
     {
-        var helpUri = RuleHelpLinks.For(rule.Id);
-        var full = (page is null ? null : RulePage.WhatItFlags(page)) ?? Sentence(rule.Title);
+        var helpUri = houseRuleSource is null ? RuleHelpLinks.For(rule.Id) : null;
+        var full = (page is null ? null : RulePage.Condition(page)) ?? Sentence(rule.Title);
         json.WriteStartObject();
         json.WriteString("id", rule.Id);
         json.WriteString("name", PascalName(rule.Id));
@@ -141,7 +141,7 @@ public static class SarifWriter
         json.WriteStartObject("help");
         if (page is null)
         {
-            json.WriteString("text", $"{full} See {helpUri}");
+            json.WriteString("text", helpUri is null ? $"{full} (a house rule declared in {houseRuleSource})" : $"{full} See {helpUri}");
         }
         else
         {
@@ -150,10 +150,23 @@ public static class SarifWriter
         }
 
         json.WriteEndObject();
-        json.WriteString("helpUri", helpUri);
+        if (helpUri is not null)
+        {
+            json.WriteString("helpUri", helpUri);
+        }
+
         json.WriteStartObject("defaultConfiguration");
         json.WriteString("level", rule.DefaultSeverity.Name());
         json.WriteEndObject();
+        if (houseRuleSource is not null)
+        {
+            json.WriteStartObject("properties");
+            json.WriteStartArray("tags");
+            json.WriteStringValue("house-rule");
+            json.WriteEndArray();
+            json.WriteEndObject();
+        }
+
         json.WriteEndObject();
     }
 

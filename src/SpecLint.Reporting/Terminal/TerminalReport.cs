@@ -5,10 +5,10 @@ using SpecLint.Rules.Engine;
 namespace SpecLint.Reporting.Terminal;
 
 /// <summary>
-/// The terminal output of DESIGN §6: one line per finding, <c>file:line:col: severity rule-id: message</c>,
+/// The terminal output of references.md §D6: one line per finding, <c>file:line:col: severity rule-id: message</c>,
 /// then a summary. Colour only on a terminal and never when NO_COLOR is set.
 /// </summary>
-public static class TerminalReport
+internal static class TerminalReport
 {
     /// <summary>Writes the findings and the summary.</summary>
     public static void Write(CheckRun run, TextWriter output, bool color, bool outputFailed = false)

@@ -3,7 +3,7 @@ using SpecLint.Rules.Engine;
 namespace SpecLint.Rules.Checking;
 
 /// <summary>What a <c>check</c> run is asked to do.</summary>
-public sealed record CheckOptions
+internal sealed record CheckOptions
 {
     /// <summary>Files and folders to check; empty means the repository that contains the working directory.</summary>
     public IReadOnlyList<string> Paths { get; init; } = [];
@@ -22,6 +22,9 @@ public sealed record CheckOptions
 
     /// <summary>The rules to run.</summary>
     public RuleCatalog Catalog { get; init; } = RuleCatalog.BuiltIn;
+
+    /// <summary>Compiles and loads the house rules a configuration names; null skips house rules (<c>--no-house-rules</c>).</summary>
+    public IHouseRuleSource? HouseRules { get; init; }
 
     /// <summary>Reports progress (file index, count, file) for long runs; null for none.</summary>
     public Action<int, int, string>? Progress { get; init; }

@@ -11,7 +11,7 @@ namespace SpecLint.Rules.Checking;
 /// One <c>check</c>: finds the spec files, reads each with its repository configuration, analyses it, runs
 /// the rules, applies waivers. A file that cannot be read is reported and the others are still checked.
 /// </summary>
-public static class CheckRunner
+internal static class CheckRunner
 {
     /// <summary>
     /// Runs a check. Never throws for bad input; an exception here is a SpecLint bug. <paramref name="tolerances"/>
@@ -21,7 +21,7 @@ public static class CheckRunner
     {
         ArgumentNullException.ThrowIfNull(options);
         var problems = new List<Finding>();
-        var configs = new ConfigCache(options.ConfigPath, options.Catalog, problems);
+        var configs = new ConfigCache(options.ConfigPath, options.Catalog, options.HouseRules, problems);
         var rootConfig = options.Paths.Count == 0 || options.ConfigPath is not null
             ? configs.ForFolder(Directory.GetCurrentDirectory())
             : configs.ForFolder(Directory.Exists(options.Paths[0]) ? options.Paths[0] : Path.GetDirectoryName(Path.GetFullPath(options.Paths[0]))!);
@@ -30,6 +30,14 @@ public static class CheckRunner
             ? options.Paths
             : [rootConfig.Path is { } p ? Path.GetRelativePath(Directory.GetCurrentDirectory(), Path.GetDirectoryName(Path.GetFullPath(p))!) : "."];
         var files = SpecFileFinder.Find(paths, rootConfig.Include, out var missing);
+        if (options.HouseRules is not null)
+        {
+            // A house rule's cases carry deliberate mistakes; 'test-rules' runs them, a check of the tree does not
+            // (unless a case file is named on the command line).
+            var named = paths.Select(p => Path.GetFullPath(p)).ToHashSet(StringComparer.Ordinal);
+            files = [.. files.Where(f => named.Contains(Path.GetFullPath(f)) || !HouseRuleCases.IsCase(f, configs.ForSpec(f)))];
+        }
+
         foreach (var m in missing)
         {
             problems.Add(new Finding(RuleIds.SpecInvalid, Severity.Error, m, "", 1, 1, "no such file or folder"));
@@ -46,7 +54,7 @@ public static class CheckRunner
         {
             options.Progress?.Invoke(i + 1, files.Count, files[i]);
             var config = configs.ForSpec(files[i]);
-            outcomes.Add(CheckOne(files[i], config, options, tolerances));
+            outcomes.Add(CheckOne(files[i], config, options with { Catalog = configs.CatalogFor(config) }, tolerances));
         }
 
         CheckUniqueNames(outcomes, problems);
@@ -54,7 +62,10 @@ public static class CheckRunner
             [.. outcomes],
             [.. problems],
             options.FailOn ?? ConfigurationBinding.FailOn(rootConfig),
-            [.. configs.Files]);
+            [.. configs.Files])
+        {
+            Catalog = configs.AllRules,
+        };
     }
 
     /// <summary>Checks one file with a given configuration.</summary>
@@ -113,9 +124,17 @@ public static class CheckRunner
         }
     }
 
-    private sealed class ConfigCache(string? explicitPath, RuleCatalog catalog, List<Finding> problems)
+    private sealed class ConfigCache(string? explicitPath, RuleCatalog catalog, IHouseRuleSource? houseRules, List<Finding> problems)
     {
         private readonly Dictionary<string, RepoConfig> _byPath = new(StringComparer.Ordinal);
+        private readonly Dictionary<RepoConfig, RuleCatalog> _catalogs = new(ReferenceEqualityComparer.Instance);
+
+        /// <summary>Every rule of every configuration read so far (for reports that describe the rules).</summary>
+        private RuleCatalog? _allRules;
+
+        public RuleCatalog AllRules => _allRules ?? catalog;
+
+        public RuleCatalog CatalogFor(RepoConfig config) => _catalogs.GetValueOrDefault(config, catalog);
 
         public IEnumerable<string> Files => _byPath.Keys.Where(k => k.Length > 0).Order(StringComparer.Ordinal);
 
@@ -144,7 +163,17 @@ public static class CheckRunner
                 }
 
                 config = loaded.Config;
-                problems.AddRange(ConfigurationBinding.Validate(config, catalog, display));
+                var rules = catalog;
+                if (houseRules is not null)
+                {
+                    var set = houseRules.Load(config);
+                    problems.AddRange(set.Problems);
+                    rules = catalog.With(set);
+                    _allRules = AllRules.With(set);
+                }
+
+                _catalogs[config] = rules;
+                problems.AddRange(ConfigurationBinding.Validate(config, rules, display));
             }
 
             _byPath[key] = config;

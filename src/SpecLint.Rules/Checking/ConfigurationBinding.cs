@@ -12,7 +12,7 @@ namespace SpecLint.Rules.Checking;
 /// exist: an unknown rule id, an option a rule does not declare, or a value in the wrong unit is a
 /// <c>config-invalid</c> error at its line, never silently ignored.
 /// </summary>
-public static class ConfigurationBinding
+internal static class ConfigurationBinding
 {
     /// <summary>The configuration of one rule.</summary>
     public static RuleConfiguration For(RepoConfig config, string ruleId)

@@ -6,7 +6,7 @@ using SpecLint.Rules.Engine;
 namespace SpecLint.Rules.Checking;
 
 /// <summary>The analysis the engine runs for each spec and for each fix a rule re-checks.</summary>
-public sealed class DefaultSpecAnalyzer : ISpecAnalyzer
+internal sealed class DefaultSpecAnalyzer : ISpecAnalyzer
 {
     private readonly Func<TiaSpec, bool, ToleranceResult?> _tolerances;
 

@@ -8,7 +8,7 @@ namespace SpecLint.Rules.Checking;
 /// characters within one name, <c>?</c> one character. Paths are matched with forward slashes, relative
 /// to the folder that holds the configuration.
 /// </summary>
-public sealed class GlobPattern
+internal sealed class GlobPattern
 {
     private readonly Regex _regex;
 

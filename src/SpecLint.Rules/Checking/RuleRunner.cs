@@ -8,7 +8,7 @@ namespace SpecLint.Rules.Checking;
 /// Runs every enabled rule on one analysed spec, with configuration applied. Fix searches get a check that
 /// re-runs the other rules on each candidate, so a suggested value never trades one error for another.
 /// </summary>
-public sealed class RuleRunner
+internal sealed class RuleRunner
 {
     private readonly RuleCatalog _catalog;
     private readonly RepoConfig _config;
@@ -38,7 +38,7 @@ public sealed class RuleRunner
         foreach (var rule in _catalog.Rules)
         {
             var ruleConfig = ConfigurationBinding.For(_config, rule.Descriptor.Id);
-            if (ruleConfig.Off)
+            if (ruleConfig.Off || !AppliesTo(rule.Descriptor.Id, original))
             {
                 continue;
             }
@@ -50,12 +50,19 @@ public sealed class RuleRunner
             };
             foreach (var f in rule.Check(context))
             {
-                findings.Add(ruleConfig.Severity is { } s ? f with { Severity = s } : f);
+                // The configured severity applies to the rule's own findings; an engine finding about a house rule
+                // (it threw, or ran out of time) keeps its own.
+                findings.Add(ruleConfig.Severity is { } s && f.RuleId == rule.Descriptor.Id ? f with { Severity = s } : f);
             }
         }
 
         return findings;
     }
+
+    // `rules: {id: {tags: [medical]}}` limits a rule to specs that carry one of the tags.
+    private bool AppliesTo(string ruleId, TiaSpec spec) =>
+        _config.ForRule(ruleId) is not { Tags.IsEmpty: false } settings
+        || settings.Tags.Any(t => spec.Tags.Contains(t, StringComparer.Ordinal));
 
     // A candidate may leave an unrelated error in place (a clipped output is not fixed by Cf), but must not
     // add a new one, nor leave an error that is about the very key being changed: two rules that both want a

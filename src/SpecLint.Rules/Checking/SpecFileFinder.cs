@@ -6,7 +6,7 @@ namespace SpecLint.Rules.Checking;
 /// Turns the paths given on the command line into spec files: files are taken as they are, folders are
 /// searched for files matching the include globs. Output order is ordinal by path so reports are stable.
 /// </summary>
-public static class SpecFileFinder
+internal static class SpecFileFinder
 {
     private static readonly string[] SkippedFolders = [".git", "bin", "obj", "node_modules"];
 

@@ -13,7 +13,7 @@ namespace SpecLint.Rules.Checking;
 /// <param name="Analysis">The nominal analysis with noise, or null.</param>
 /// <param name="Tolerances">Corners and Monte Carlo, or null when nothing varies or the analysis did not run.</param>
 /// <param name="Findings">Findings ordered by line, column and rule id.</param>
-public sealed record SpecOutcome(
+internal sealed record SpecOutcome(
     string File,
     TiaSpec? Spec,
     Circuit? Circuit,

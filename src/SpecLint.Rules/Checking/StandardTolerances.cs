@@ -5,7 +5,7 @@ using SpecLint.Core.Units;
 namespace SpecLint.Rules.Checking;
 
 /// <summary>The tolerance analysis a check runs: corners always, Monte Carlo in the main run, thresholds from the configuration.</summary>
-public static class StandardTolerances
+internal static class StandardTolerances
 {
     private const string PhaseMarginRule = "phase-margin";
     private const string PeakingRule = "peaking";

@@ -1,7 +1,7 @@
 namespace SpecLint.Rules.Engine;
 
-/// <summary>Process exit codes (DESIGN §5).</summary>
-public static class ExitCodes
+/// <summary>Process exit codes (references.md §D5).</summary>
+internal static class ExitCodes
 {
     /// <summary>Nothing at or above the fail level.</summary>
     public const int Clean = 0;

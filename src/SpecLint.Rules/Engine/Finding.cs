@@ -34,7 +34,7 @@ public sealed record Finding(
     /// <summary>The waiver's reason as written in the spec, control characters shown as escapes.</summary>
     public string? WaiverReason { get; init; } = WaiverReason is null ? null : TextSafety.ForTerminal(WaiverReason);
 
-    /// <summary>The terminal form of DESIGN §6: <c>file:line:col: severity rule-id: message</c>.</summary>
+    /// <summary>The terminal form of references.md §D6: <c>file:line:col: severity rule-id: message</c>.</summary>
     public override string ToString() =>
         $"{File}:{Line}:{Column}: {Severity.Name()} {RuleId}: {Message}{(Waived ? " (waived: " + WaiverReason + ")" : "")}";
 }

@@ -1,7 +1,7 @@
 namespace SpecLint.Rules.Engine;
 
 /// <summary>
-/// One replacement value that resolves a finding (DESIGN §5 <c>fix</c>): the JSON Pointer of the spec key
+/// One replacement value that resolves a finding (references.md §D5 <c>fix</c>): the JSON Pointer of the spec key
 /// and the text to write there. Rules only offer a fix after re-running the analysis with it.
 /// </summary>
 /// <param name="Path">JSON Pointer of the key to change, e.g. "/feedback/capacitance".</param>

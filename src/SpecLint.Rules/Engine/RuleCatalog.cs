@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using System.Reflection;
+using SpecLint.Rules.Checking;
 
 namespace SpecLint.Rules.Engine;
 
@@ -7,11 +8,47 @@ namespace SpecLint.Rules.Engine;
 /// The rules a run uses, discovered by reflection: every public, non-abstract <see cref="IRule"/> with a
 /// parameterless constructor in the given assemblies. No hand-kept list, so a rule cannot be forgotten.
 /// </summary>
-public sealed class RuleCatalog
+internal sealed class RuleCatalog
 {
-    private RuleCatalog(ImmutableArray<IRule> rules)
+    private readonly ImmutableDictionary<string, string> _housePages;
+    private readonly ImmutableDictionary<string, string> _houseSources;
+
+    private RuleCatalog(ImmutableArray<IRule> rules, ImmutableDictionary<string, string>? housePages = null, ImmutableDictionary<string, string>? houseSources = null)
     {
         Rules = rules;
+        _housePages = housePages ?? ImmutableDictionary<string, string>.Empty;
+        _houseSources = houseSources ?? ImmutableDictionary<string, string>.Empty;
+    }
+
+    /// <summary>True when <paramref name="id"/> is a house rule (compiled from the repository) rather than a built-in rule.</summary>
+    public bool IsHouseRule(string id) => _houseSources.ContainsKey(id);
+
+    /// <summary>The .cs file that declares a house rule, or null for a built-in rule.</summary>
+    public string? HouseRuleSource(string id) => _houseSources.GetValueOrDefault(id);
+
+    /// <summary>The Markdown page of a rule: a house rule's <c>&lt;id&gt;.md</c>, or the built-in page; null when there is none.</summary>
+    public string? Page(string id) => _housePages.TryGetValue(id, out var page) ? page : IsHouseRule(id) ? null : RuleDocs.Page(id);
+
+    /// <summary>
+    /// This catalog plus a set of house rules. A house rule whose id is already taken is left out here; the
+    /// house-rule loader reports the collision at the class.
+    /// </summary>
+    public RuleCatalog With(HouseRuleSet houseRules)
+    {
+        ArgumentNullException.ThrowIfNull(houseRules);
+        var taken = Rules.Select(r => r.Descriptor.Id).ToHashSet(StringComparer.Ordinal);
+        var added = houseRules.Rules.Where(r => taken.Add(r.Descriptor.Id)).ToList();
+        if (added.Count == 0)
+        {
+            return this;
+        }
+
+        var all = Rules.AddRange(added).OrderBy(r => r.Descriptor.Id, StringComparer.Ordinal).ToImmutableArray();
+        var ids = added.Select(r => r.Descriptor.Id).ToHashSet(StringComparer.Ordinal);
+        return new RuleCatalog(
+            all,
+            _housePages.SetItems(houseRules.Pages.Where(p => ids.Contains(p.Key))),
+            _houseSources.SetItems(houseRules.Sources.Where(p => ids.Contains(p.Key))));
     }
 
     /// <summary>The rules, ordered by id so that output is stable.</summary>
@@ -48,7 +85,7 @@ public sealed class RuleCatalog
             throw new InvalidOperationException($"two rules share the id '{duplicate.Key}'");
         }
 
-        return new RuleCatalog(all);
+        return new RuleCatalog(all, _housePages, _houseSources);
     }
 
     /// <summary>The rule with this id, or null.</summary>

@@ -9,7 +9,7 @@ namespace SpecLint.Rules.Engine;
 /// <param name="Options">Option values as written (quantity grammar), by key.</param>
 /// <param name="OptionPositions">Where each option sits in the configuration file, for error messages.</param>
 /// <param name="File">The configuration file the values came from, or null for built-in defaults.</param>
-public sealed record RuleConfiguration(
+internal sealed record RuleConfiguration(
     bool Off,
     Severity? Severity,
     ImmutableDictionary<string, string> Options,

@@ -17,8 +17,8 @@ public sealed class RuleContext
 
     private readonly ISpecAnalyzer _analyzer;
 
-    /// <summary>Creates a context for one rule and one analysed spec.</summary>
-    public RuleContext(
+    /// <summary>Creates a context for one rule and one analysed spec (the engine does; rules receive it).</summary>
+    internal RuleContext(
         SpecAnalysis analysis,
         ISpecAnalyzer analyzer,
         RuleDescriptor descriptor,
@@ -51,10 +51,10 @@ public sealed class RuleContext
     /// False while the engine re-checks another rule's fix: rules then report findings only and do not
     /// search for fixes of their own (which keeps verification cheap and free of recursion).
     /// </summary>
-    public bool SearchFixes { get; init; } = true;
+    public bool SearchFixes { get; internal init; } = true;
 
     /// <summary>Runs the other enabled rules on a candidate spec and tells whether any error-level rule that was clean now fails.</summary>
-    public Func<TiaSpec, string, bool>? OtherRulesCheck { get; init; }
+    internal Func<TiaSpec, string, bool>? OtherRulesCheck { get; init; }
 
     /// <summary>
     /// True when <paramref name="candidate"/> trips no error-level rule (besides this one) that passes for the
@@ -69,13 +69,20 @@ public sealed class RuleContext
     /// <summary>The value of one of this rule's options in SI: the configured value, or the declared default.</summary>
     public double OptionSi(string key) => OptionSi(_descriptor, _configuration, key);
 
-    /// <summary>The value of one of this rule's options as a typed quantity.</summary>
+    /// <summary>
+    /// The value of one of this rule's options as a typed quantity. <typeparamref name="T"/> must have the
+    /// dimension the option declares: reading a "50 deg" option as a <see cref="Capacitance"/> throws.
+    /// </summary>
     public T Option<T>(string key)
-        where T : struct, IQuantity<T> => T.FromSi(OptionSi(key));
+        where T : struct, IQuantity<T> => T.FromSi(OptionSi(_descriptor, _configuration, key, T.Dimension));
 
     /// <summary>The value of another rule's option (for rules that share a threshold, such as the phase-margin floor).</summary>
     public T OptionOf<T>(RuleDescriptor other, string key)
-        where T : struct, IQuantity<T> => T.FromSi(OptionSi(other, _configurationOf(other.Id), key));
+        where T : struct, IQuantity<T>
+    {
+        ArgumentNullException.ThrowIfNull(other);
+        return T.FromSi(OptionSi(other, _configurationOf(other.Id), key, T.Dimension));
+    }
 
     /// <summary>Creates a finding at the key <paramref name="pointer"/> (or its nearest written ancestor).</summary>
     public Finding Report(string pointer, string message, FixSuggestion? fix = null, Severity? severity = null)
@@ -84,10 +91,16 @@ public sealed class RuleContext
         return new Finding(_descriptor.Id, severity ?? _descriptor.DefaultSeverity, Spec.File, pointer, at.Line, at.Column, message, fix);
     }
 
-    private static double OptionSi(RuleDescriptor descriptor, RuleConfiguration configuration, string key)
+    private static double OptionSi(RuleDescriptor descriptor, RuleConfiguration configuration, string key, Dimension? wanted = null)
     {
         var option = descriptor.Options.FirstOrDefault(o => o.Key == key)
             ?? throw new ArgumentException($"rule '{descriptor.Id}' declares no option '{key}'", nameof(key));
+        if (wanted is { } w && w != option.Dimension)
+        {
+            throw new ArgumentException(
+                $"option '{key}' of rule '{descriptor.Id}' is declared as {option.Dimension}, but was read as {w}; read it as the type of its dimension", nameof(key));
+        }
+
         // An unusable value was already reported as config-invalid (exit 2); the rule runs on its default.
         return configuration.Options.TryGetValue(key, out var text) && OptionValues.TryRead(option, text, out var si, out _)
             ? si

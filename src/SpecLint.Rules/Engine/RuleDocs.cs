@@ -2,11 +2,18 @@ using System.Reflection;
 
 namespace SpecLint.Rules.Engine;
 
-/// <summary>The rule pages (rules/&lt;id&gt;/&lt;id&gt;.md), embedded in the library so <c>explain</c> works from an installed tool.</summary>
-public static class RuleDocs
+/// <summary>The rule pages (rules/&lt;id&gt;/&lt;id&gt;.md), embedded in the library so <c>speclint why</c> works from an installed tool.</summary>
+internal static class RuleDocs
 {
-    /// <summary>The base of the published help links; a rule's page is <c>{base}/{id}/{id}.md</c>.</summary>
-    public const string HelpBase = "https://github.com/speclint/speclint/blob/main/rules";
+    /// <summary>
+    /// Where the project's files will be published. A placeholder until then: the reserved <c>.invalid</c>
+    /// domain (RFC 2606) cannot point anywhere by accident. Change it here, in one place, when the project has
+    /// a home of its own.
+    /// </summary>
+    public const string ProjectHome = "https://speclint.invalid";
+
+    /// <summary>The base of the help links; a rule's page is <c>{base}/{id}/{id}.md</c>, the same path as in the repository.</summary>
+    public const string HelpBase = ProjectHome + "/rules";
 
     /// <summary>The help URI of a rule's page.</summary>
     public static Uri HelpUri(string id) => new($"{HelpBase}/{id}/{id}.md");

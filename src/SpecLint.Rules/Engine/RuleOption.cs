@@ -9,7 +9,7 @@ namespace SpecLint.Rules.Engine;
 /// <param name="Key">The configuration key, e.g. "floor".</param>
 /// <param name="Dimension">The value's dimension; parsed with the quantity grammar.</param>
 /// <param name="Default">The default, written as a user would, e.g. "45 deg".</param>
-/// <param name="Description">One line for the docs and <c>speclint explain</c>.</param>
+/// <param name="Description">One line for the docs and <c>speclint why</c>.</param>
 public sealed record RuleOption(string Key, Dimension Dimension, string Default, string Description)
 {
     /// <summary>The default in SI.</summary>

@@ -1,7 +1,7 @@
 namespace SpecLint.Rules.Engine;
 
 /// <summary>Severity names as users type them in configuration and see them in output.</summary>
-public static class SeverityNames
+internal static class SeverityNames
 {
     /// <summary>The configuration word that turns a rule off.</summary>
     public const string Off = "off";

@@ -8,7 +8,7 @@ namespace SpecLint.Rules.Engine;
 /// expired one is itself an error and waives nothing (so the gate closes again on the expiry day); a live
 /// waiver that matches nothing is a warning, because it would silently hide the next regression.
 /// </summary>
-public static class WaiverApplication
+internal static class WaiverApplication
 {
     /// <summary>Returns the findings with waivers applied, plus findings about the waivers themselves.</summary>
     public static IReadOnlyList<Finding> Apply(TiaSpec spec, IReadOnlyList<Finding> findings, DateOnly today, IEnumerable<string> knownIds)
@@ -30,7 +30,7 @@ public static class WaiverApplication
             var matched = false;
             for (var i = 0; i < result.Count; i++)
             {
-                if (result[i].RuleId == waiver.Rule && !result[i].Waived && result[i].RuleId != RuleIds.WaiverExpired)
+                if (result[i].RuleId == waiver.Rule && !result[i].Waived && result[i].RuleId != RuleIds.WaiverExpired && !RuleIds.HouseRuleIds.Contains(result[i].RuleId))
                 {
                     result[i] = result[i] with { Waived = true, WaiverReason = waiver.Reason };
                     matched = true;

@@ -8,7 +8,7 @@ namespace SpecLint.Core.Tests.Analysis;
 
 public sealed class CircuitFactoryTests
 {
-    /// <summary>The DESIGN §3 example spec, built directly (no YAML).</summary>
+    /// <summary>The references.md §D3 example spec, built directly (no YAML).</summary>
     private static TiaSpec Spec(Spread<Capacitance>? cf) => new(
         "ch2.tia.yaml", 1, "transimpedance", "fluor-ch2", null, [],
         new Conditions(

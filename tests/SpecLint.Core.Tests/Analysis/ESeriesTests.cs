@@ -3,13 +3,13 @@ using SpecLint.Core.Units;
 
 namespace SpecLint.Core.Tests.Analysis;
 
-/// <summary>IEC 60063 tables (REFERENCE §3.4; values from memory, the standard was not consulted).</summary>
+/// <summary>IEC 60063 tables (references.md §3.4; values from memory, the standard was not consulted).</summary>
 public sealed class ESeriesTests
 {
     [Fact]
     public void E12_and_E24_are_the_IEC_60063_tables()
     {
-        // REFERENCE §3.4 (IEC 60063:2015, from memory).
+        // references.md §3.4 (IEC 60063:2015, from memory).
         Assert.Equal([1.0, 1.2, 1.5, 1.8, 2.2, 2.7, 3.3, 3.9, 4.7, 5.6, 6.8, 8.2], ESeries.E12.Values.ToArray());
         Assert.Equal(
             [1.0, 1.1, 1.2, 1.3, 1.5, 1.6, 1.8, 2.0, 2.2, 2.4, 2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 5.1, 5.6, 6.2, 6.8, 7.5, 8.2, 9.1],
@@ -20,7 +20,7 @@ public sealed class ESeriesTests
     [Fact]
     public void E96_starts_and_ends_as_in_the_reference()
     {
-        // REFERENCE §3.4: 1.00 1.02 1.05 1.07 1.10 1.13 1.15 1.18 1.21 1.24 1.27 1.30 … 9.53 9.76.
+        // references.md §3.4: 1.00 1.02 1.05 1.07 1.10 1.13 1.15 1.18 1.21 1.24 1.27 1.30 … 9.53 9.76.
         Assert.Equal([1.00, 1.02, 1.05, 1.07, 1.10, 1.13, 1.15, 1.18, 1.21, 1.24, 1.27, 1.30], ESeries.E96.Values.Take(12).ToArray());
         Assert.Equal([9.53, 9.76], ESeries.E96.Values.TakeLast(2).ToArray());
         Assert.Equal(96, ESeries.E96.Values.Length);
@@ -29,7 +29,7 @@ public sealed class ESeriesTests
     [Fact]
     public void E96_equals_the_rounded_geometric_formula()
     {
-        // REFERENCE §3.4 finding: E96 = round(10^(i/96), 2) for all 96 values.
+        // references.md §3.4 finding: E96 = round(10^(i/96), 2) for all 96 values.
         for (var i = 0; i < 96; i++)
         {
             Assert.Equal(Math.Round(Math.Pow(10, i / 96.0), 2), ESeries.E96.Values[i]);
@@ -39,7 +39,7 @@ public sealed class ESeriesTests
     [Fact]
     public void E24_does_not_follow_the_formula_at_eight_values()
     {
-        // REFERENCE §3.4: round(10^(i/24), 1) differs at 2.7 3.0 3.3 3.6 3.9 4.3 4.7 8.2.
+        // references.md §3.4: round(10^(i/24), 1) differs at 2.7 3.0 3.3 3.6 3.9 4.3 4.7 8.2.
         var differ = Enumerable.Range(0, 24)
             .Where(i => Math.Round(Math.Pow(10, i / 24.0), 1) != ESeries.E24.Values[i])
             .Select(i => ESeries.E24.Values[i]);
@@ -62,6 +62,8 @@ public sealed class ESeriesTests
         Assert.All(ESeries.E96.Values, v => Assert.Contains(v, ESeries.E192.Values));
     }
 
+    // The tolerance that goes with each series (E6 ±20 %, E12 ±10 %, E24 ±5 %, E48 ±2 %, E96 ±1 %, E192 tighter):
+    // references.md §3.4 and [IEC60063], from memory. 7 % falls back to the next series with a tighter step.
     [Theory]
     [InlineData(0.20, "E6")]
     [InlineData(0.10, "E12")]
@@ -89,6 +91,8 @@ public sealed class ESeriesTests
         Assert.Equal(8.2e2, ESeries.E12.NextDown(1e3));
     }
 
+    // Members and non-members from the E12, E24 and E96 lists of references.md §3.4 ([IEC60063], from memory);
+    // E192's 9.20 from the round(10^(i/192), 2) rule stated there for E96 and E192.
     [Fact]
     public void Membership_uses_a_relative_tolerance_in_every_decade()
     {

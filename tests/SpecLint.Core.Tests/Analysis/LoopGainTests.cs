@@ -3,11 +3,11 @@ using SpecLint.Core.Units;
 
 namespace SpecLint.Core.Tests.Analysis;
 
-/// <summary>Phase margin, crossings and peaking: the second-order table and the pitfalls of REFERENCE §4.</summary>
+/// <summary>Phase margin, crossings and peaking: the second-order table and the pitfalls of references.md §4.</summary>
 public sealed class LoopGainTests
 {
     [Theory]
-    // ζ, PM, Mr (dB), f−3dB/fn: REFERENCE §3.3, formulas [DB], [O] (row 17), values computed there and reproduced by
+    // ζ, PM, Mr (dB), f−3dB/fn: references.md §3.3, formulas [DB], [O] (row 17), values computed there and reproduced by
     // the exact model with Cin = 0 (β = 1) and fp2 = 4ζ²·GBW, which makes T = ωn²/(s(s + 2ζωn)) with ωn = 2ζ·ωt.
     [InlineData(0.3, 33.27, 4.847, 1.4537)]
     [InlineData(0.5, 51.83, 1.249, 1.2720)]
@@ -38,7 +38,7 @@ public sealed class LoopGainTests
     {
         var r = TiaAnalyzer.Analyze(TestCircuits.WorkedExample(Capacitance.Zero), AnalysisOptions.WithoutNoise);
 
-        // REFERENCE §4 item 4: a pure two-pole loop T ≈ ωt/(s(1 + s·Rf·Cin)), so ωn² = ωt/(Rf·Cin),
+        // references.md §4 item 4: a pure two-pole loop T ≈ ωt/(s(1 + s·Rf·Cin)), so ωn² = ωt/(Rf·Cin),
         // 2ζωn = 1/(Rf·Cin), and PM follows row 17 ([DB], [O]).
         var wt = 2 * Math.PI * 10e6;
         var tau = 1e6 * 100e-12;
@@ -55,7 +55,7 @@ public sealed class LoopGainTests
     [Fact]
     public void Loop_that_never_reaches_one_has_no_phase_margin()
     {
-        // REFERENCE §4 item 1: A0·Rsh/(Rsh + Rf) < 1 (here 5/11) gives |T| < 1 everywhere: PM undefined, not 0 or 180.
+        // references.md §4 item 1: A0·Rsh/(Rsh + Rf) < 1 (here 5/11) gives |T| < 1 everywhere: PM undefined, not 0 or 180.
         var c = new Circuit
         {
             Rf = new Resistance(1e6),
@@ -76,7 +76,7 @@ public sealed class LoopGainTests
     [Fact]
     public void Loop_lifted_through_one_by_the_feedback_zero_lists_both_crossings()
     {
-        // REFERENCE §4 item 2: T0 = 1000·1e-4 = 0.1 < 1; the β zero (159 Hz) lifts |T| to ≈ GBW·β0/fz ≈ 6 before
+        // references.md §4 item 2: T0 = 1000·1e-4 = 0.1 < 1; the β zero (159 Hz) lifts |T| to ≈ GBW·β0/fz ≈ 6 before
         // the β pole (1.6 MHz) brings it down again: one rising and one falling crossing.
         var c = new Circuit
         {
@@ -106,7 +106,7 @@ public sealed class LoopGainTests
     [Fact]
     public void Phase_past_minus_180_degrees_gives_a_negative_margin_not_300()
     {
-        // REFERENCE §4 item 3: with Cf = 0 and a second pole below the crossover, ∠T passes −180°.
+        // references.md §4 item 3: with Cf = 0 and a second pole below the crossover, ∠T passes −180°.
         var c = TestCircuits.WorkedExample(Capacitance.Zero) with { SecondPole = new Frequency(200e3) };
         var r = TiaAnalyzer.Analyze(c, AnalysisOptions.WithoutNoise);
         var f = r.Crossover!.Value.Hertz;
@@ -135,7 +135,7 @@ public sealed class LoopGainTests
         var r = TiaAnalyzer.Analyze(c, AnalysisOptions.WithoutNoise);
         var m = new TiaModel(c);
 
-        // REFERENCE §1 definitions: f−3dB is where |Zt| falls through |Zt(0)|/√2 after the peak.
+        // references.md §1 definitions: f−3dB is where |Zt| falls through |Zt(0)|/√2 after the peak.
         Assert.True(r.PeakingDb > 3);
         Assert.True(r.Bandwidth > r.PeakFrequency);
         Assert.Equal(r.Transimpedance.Ohms / Math.Sqrt(2), m.Transimpedance(r.Bandwidth!.Value).Magnitude, 1e-6 * r.Transimpedance.Ohms);
@@ -148,7 +148,7 @@ public sealed class LoopGainTests
         var c = TestCircuits.Photodiode;
         var r = TiaAnalyzer.Analyze(c, AnalysisOptions.WithoutNoise);
 
-        // REFERENCE §1 rows 4 and 7.
+        // references.md §1 rows 4 and 7.
         var cfb = 1.15e-12;
         var cin = 17.8e-12;
         Assert.Equal(1 / (2 * Math.PI * 10e6 * cfb), r.BetaZero!.Value.Hertz, 1e-6);
@@ -157,7 +157,7 @@ public sealed class LoopGainTests
         Assert.Equal(1 + (10e6 / 2e9), r.NoiseGainDc, 1e-12);
     }
 
-    /// <summary>PM = atan(2ζ/√(√(1 + 4ζ⁴) − 2ζ²)), REFERENCE §1 row 17 ([DB], [O]).</summary>
+    /// <summary>PM = atan(2ζ/√(√(1 + 4ζ⁴) − 2ζ²)), references.md §1 row 17 ([DB], [O]).</summary>
     private static double PhaseMarginFormula(double zeta) =>
         Math.Atan(2 * zeta / Math.Sqrt(Math.Sqrt(1 + (4 * Math.Pow(zeta, 4))) - (2 * zeta * zeta))) * 180 / Math.PI;
 }

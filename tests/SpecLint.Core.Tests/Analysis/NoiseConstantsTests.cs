@@ -3,7 +3,7 @@ using SpecLint.Core.Units;
 
 namespace SpecLint.Core.Tests.Analysis;
 
-/// <summary>REFERENCE §3.1: Johnson, shot and thermal-voltage check values, evaluated through the model.</summary>
+/// <summary>references.md §3.1: Johnson, shot and thermal-voltage check values, evaluated through the model.</summary>
 public sealed class NoiseConstantsTests
 {
     private static readonly Frequency Low = new(1);
@@ -19,7 +19,7 @@ public sealed class NoiseConstantsTests
     };
 
     [Theory]
-    // √(4kTR) of 1 kΩ: 4.0704 nV/√Hz at 300 K, 4.0019 at 290 K, 4.0363 at 295 K — REFERENCE §3.1, [J][N] with CODATA 2018 [C].
+    // √(4kTR) of 1 kΩ: 4.0704 nV/√Hz at 300 K, 4.0019 at 290 K, 4.0363 at 295 K — references.md §3.1, [J][N] with CODATA 2018 [C].
     [InlineData(300, 4.0704e-9)]
     [InlineData(290, 4.0019e-9)]
     [InlineData(295, 4.0363e-9)]
@@ -36,12 +36,12 @@ public sealed class NoiseConstantsTests
         var m = new TiaModel(c);
         var inputReferred = Math.Sqrt(m.OutputNoise(Low).RfThermal) / m.Transimpedance(Low).Magnitude;
 
-        // √(4kT/R) = 4.0704 fA/√Hz at 300 K: REFERENCE §3.1, [J][N], [C].
+        // √(4kT/R) = 4.0704 fA/√Hz at 300 K: references.md §3.1, [J][N], [C].
         Assert.Equal(4.0704e-15, inputReferred, 0.00005e-15);
     }
 
     [Theory]
-    // √(2qI): 0.56607 pA/√Hz at 1 µA, 17.9007 pA/√Hz at 1 mA, 5.6607 fA/√Hz at 100 pA — REFERENCE §3.1, [S], [C].
+    // √(2qI): 0.56607 pA/√Hz at 1 µA, 17.9007 pA/√Hz at 1 mA, 5.6607 fA/√Hz at 100 pA — references.md §3.1, [S], [C].
     [InlineData(1e-6, 0.56607e-12, 0.000005e-12)]
     [InlineData(1e-3, 17.9007e-12, 0.00005e-12)]
     [InlineData(100e-12, 5.6607e-15, 0.00005e-15)]
@@ -58,12 +58,12 @@ public sealed class NoiseConstantsTests
         var m = new TiaModel(Ideal(1e3, 300) with { Imin = new Current(0.6e-6), Idark = new Current(0.4e-6) });
         var inputReferred = Math.Sqrt(m.OutputNoise(Low).Shot) / m.Transimpedance(Low).Magnitude;
 
-        // 2q(Isig + Idark), REFERENCE §4 item 11; 1 µA in total gives 0.56607 pA/√Hz (§3.1).
+        // 2q(Isig + Idark), references.md §4 item 11; 1 µA in total gives 0.56607 pA/√Hz (§3.1).
         Assert.Equal(0.56607e-12, inputReferred, 0.000005e-12);
     }
 
     [Theory]
-    // kT/q = 25.852 mV at 300 K; 2kT/q = 51.704 mV (300 K), 50.842 mV (295 K), 53.453 mV (310.15 K) — REFERENCE §3.1, [C].
+    // kT/q = 25.852 mV at 300 K; 2kT/q = 51.704 mV (300 K), 50.842 mV (295 K), 53.453 mV (310.15 K) — references.md §3.1, [C].
     [InlineData(300, 51.704e-3)]
     [InlineData(295, 50.842e-3)]
     [InlineData(310.15, 53.453e-3)]
@@ -75,7 +75,7 @@ public sealed class NoiseConstantsTests
     [Fact]
     public void kT_over_q_at_300_K()
     {
-        // 25.852 mV: REFERENCE §3.1, [C].
+        // 25.852 mV: references.md §3.1, [C].
         Assert.Equal(25.852e-3, PhysicalConstants.ThermalVoltage(new Temperature(300)).Volts, 0.0005e-3);
     }
 
@@ -90,7 +90,7 @@ public sealed class NoiseConstantsTests
     [Fact]
     public void Shot_to_thermal_ratio_is_one_at_two_kT_over_q()
     {
-        // Imin·Rf = 2kT/q makes 2qI = 4kT/Rf (REFERENCE §1 row 11): ratio 1 by construction of the definition.
+        // Imin·Rf = 2kT/q makes 2qI = 4kT/Rf (references.md §1 row 11): ratio 1 by construction of the definition.
         var t = new Temperature(300);
         var rf = 1e6;
         var imin = 2 * PhysicalConstants.ThermalVoltage(t).Volts / rf;

@@ -10,7 +10,7 @@ public sealed class NoiseIntegrationTests
     public void Rf_noise_of_an_ideal_TIA_is_kT_over_C()
     {
         // Rf = 1 GΩ, Cf = 1 pF at 300 K with an op-amp fast enough to be ideal. The kT/C value 64.358 µV and the
-        // exact-model 64.355 µV over 1 µHz–1 MHz are REFERENCE §3.1 ([MC]/[H], from memory). REFERENCE does not
+        // exact-model 64.355 µV over 1 µHz–1 MHz are references.md §3.1 ([MC]/[H], from memory). references.md does not
         // name its Rf: 1 GΩ reproduces the band-limited figure (the 1 MHz cut loses (2/π)·fc/fhi of the power).
         var c = new Circuit
         {
@@ -35,8 +35,8 @@ public sealed class NoiseIntegrationTests
     [Fact]
     public void Voltage_noise_gain_reaches_the_one_plus_Cin_over_Cf_plateau()
     {
-        // Cin = 99 pF, Cf = 1 pF: plateau 100 (REFERENCE §3.1, [G], [F] ch. 7); exact model at 1 MHz 99.81 (same
-        // table). REFERENCE does not give Rf and the op-amp; Rf = 1 MΩ, GBW = 1 GHz, A0 = 1e9 reproduce 99.81.
+        // Cin = 99 pF, Cf = 1 pF: plateau 100 (references.md §3.1, [G], [F] ch. 7); exact model at 1 MHz 99.81 (same
+        // table). references.md does not give Rf and the op-amp; Rf = 1 MΩ, GBW = 1 GHz, A0 = 1e9 reproduce 99.81.
         var c = new Circuit
         {
             Rf = new Resistance(1e6),
@@ -68,7 +68,7 @@ public sealed class NoiseIntegrationTests
         var cold = TiaAnalyzer.Analyze(c, band with { NoiseTemperature = new Temperature(300) }).Noise!;
         var hot = TiaAnalyzer.Analyze(c, band with { NoiseTemperature = new Temperature(330) }).Noise!;
 
-        // Thermal noise power ∝ T (REFERENCE §1 row 8), so rms scales with √(330/300); shot and e_n do not.
+        // Thermal noise power ∝ T (references.md §1 row 8), so rms scales with √(330/300); shot and e_n do not.
         Assert.Equal(Math.Sqrt(1.1), hot.Output.RfThermal.Volts / cold.Output.RfThermal.Volts, 1e-12);
         Assert.Equal(cold.Output.Shot, hot.Output.Shot);
         Assert.Equal(cold.Output.VoltageNoise, hot.Output.VoltageNoise);
@@ -76,7 +76,7 @@ public sealed class NoiseIntegrationTests
     }
 
     [Theory]
-    // 0.1·Cf45 gives Q ≈ 10, about 20 dB of peaking (REFERENCE §1 row 15); 1.0 and 1.41 are the usual designs.
+    // 0.1·Cf45 gives Q ≈ 10, about 20 dB of peaking (references.md §1 row 15); 1.0 and 1.41 are the usual designs.
     // 0 is the parasitic-free Cf = 0 case: Q ≈ 80, a 38 dB spike.
     [InlineData(0.0)]
     [InlineData(0.1)]
@@ -111,7 +111,7 @@ public sealed class NoiseIntegrationTests
         var r = TiaAnalyzer.Analyze(TestCircuits.Photodiode, AnalysisOptions.Default);
         var n = r.Noise!;
 
-        // Input-referred = output rms / |Zt(0)| (REFERENCE §1 row 10); SNR = Imin·|Zt(0)|/rms; NEP = I_rms/R.
+        // Input-referred = output rms / |Zt(0)| (references.md §1 row 10); SNR = Imin·|Zt(0)|/rms; NEP = I_rms/R.
         Assert.Equal(n.OutputRms.Volts / r.Transimpedance.Ohms, n.InputRms.Amperes, 1e-24);
         Assert.Equal(20 * Math.Log10(2e-9 / n.InputRms.Amperes), n.SnrAtMinimumDb!.Value, 1e-9);
         Assert.Equal(n.InputRms.Amperes / 0.42, n.NoiseEquivalentPower!.Value.Watts, 1e-24);

@@ -6,11 +6,11 @@ namespace SpecLint.Core.Tests.Analysis;
 /// <summary>Circuits the analysis tests share.</summary>
 internal static class TestCircuits
 {
-    /// <summary>Cf45 of the worked example, √(Cin/(2π·Rf·GBW)) (REFERENCE §1 row 14, §3.2).</summary>
+    /// <summary>Cf45 of the worked example, √(Cin/(2π·Rf·GBW)) (references.md §1 row 14, §3.2).</summary>
     public static Capacitance Cf45 => new(Math.Sqrt(100e-12 / (2 * Math.PI * 1e6 * 10e6)));
 
     /// <summary>
-    /// REFERENCE §3.2 worked example: Cin = 100 pF, Rf = 1 MΩ, GBW = 10 MHz, single pole, A0 = 1e9, with the given Cf.
+    /// references.md §3.2 worked example: Cin = 100 pF, Rf = 1 MΩ, GBW = 10 MHz, single pole, A0 = 1e9, with the given Cf.
     /// </summary>
     public static Circuit WorkedExample(Capacitance cf) => new()
     {

@@ -6,17 +6,17 @@ namespace SpecLint.Core.Tests.Ngspice;
 
 /// <summary>
 /// Writes one ngspice netlist that checks a <see cref="Circuit"/> independently of <see cref="TiaModel"/>,
-/// with the technique of REFERENCE §2: an op-amp macro from G/R/C with noiseless resistors, noise sources from
+/// with the technique of references.md §2: an op-amp macro from G/R/C with noiseless resistors, noise sources from
 /// reverse-biased diodes scaled by CCCS/CCVS, the loop broken at the ideal op-amp output, and eight DC copies.
 /// </summary>
 /// <remarks>
 /// Copies in the one netlist (linear and unconnected, so they do not interact):
-/// z — closed loop, 1 A AC into the inverting node: V(oz) = −Zt (REFERENCE §4 item 9);
+/// z — closed loop, 1 A AC into the inverting node: V(oz) = −Zt (references.md §4 item 9);
 /// t — loop broken at the VCVS output, 1 V AC driving Rf ∥ Cf: T = −V(oxt);
 /// n — closed loop with the noise diodes, for <c>.noise</c>;
 /// d0…d7 — DC: ±Vos × ±Ib × (idle, full scale).
 /// The diodes sit at 100 V reverse bias with IS = 1 mA, where SPICE's reverse current is IS to 1e-10
-/// (REFERENCE §2 notes), so the gains use 1 mA instead of a separately measured Id. temp = tnom keeps IS at 1 mA.
+/// (references.md §2 notes), so the gains use 1 mA instead of a separately measured Id. temp = tnom keeps IS at 1 mA.
 /// </remarks>
 internal static class NetlistWriter
 {
@@ -80,8 +80,10 @@ internal static class NetlistWriter
 
         sb.AppendLine(".control");
         sb.AppendLine("op");
+        // 12 significant digits: the default 7 would limit the DC comparison to the printed resolution (~1 µV at volts).
+        sb.AppendLine("set numdgt=12");
         sb.AppendLine("print " + string.Join(' ', Enumerable.Range(0, 8).Select(i => $"v(od{i})")));
-        sb.AppendLine($"ac dec 400 {F(acStartHz)} {F(acStopHz)}");
+        sb.AppendLine($"ac dec 4000 {F(acStartHz)} {F(acStopHz)}");
         sb.AppendLine($"wrdata {AcFile} v(oz) v(oxt)");
         sb.AppendLine($"noise v(on) Iinn dec 1000 {F(noiseLowHz)} {F(noiseHighHz)}");
         // ngspice's own total can come out as NaN (seen with the Cf = 0 spike), so the spectrum is written too.

@@ -1,31 +1,38 @@
 using System.Numerics;
 using SpecLint.Core.Analysis;
 using SpecLint.Core.Units;
+using SpecLint.Tests.Shared;
 using Xunit.Abstractions;
 
 namespace SpecLint.Core.Tests.Ngspice;
 
 /// <summary>
-/// The analysis against ngspice on invented circuits (REFERENCE §2). Tolerances: PM 0.5°, bandwidth and crossover
-/// 1 %, integrated noise 2 %, DC output 1 mV. Without ngspice the tests pass with a note, except under CI=true,
-/// where they fail.
+/// The analysis against ngspice on invented circuits (references.md §2). The tolerances are a small multiple of
+/// the agreement reached, and the agreement is set by how the ngspice side is read, not by the model:
+/// <list type="bullet">
+/// <item>|Zt(0)| 1e-4 relative (worst seen 2.5e-5, on the case whose DC loop gain is near 1, where ngspice's
+/// gmin and the finite gain matter; 1e-9 elsewhere);</item>
+/// <item>bandwidth 2e-4 relative (worst seen 4.8e-5, the same case) and crossover 1e-7 (worst 1.3e-8): the AC
+/// sweep has 4000 points per decade (a step of 0.058 % in f) and crossings are interpolated linearly in ln f;</item>
+/// <item>phase margin 5e-6° (worst seen 2e-7° nominal, 7e-7° at the worst corner): the same interpolation of the
+/// unwrapped phase;</item>
+/// <item>peaking 2e-4 dB (worst seen 5.3e-5 dB, on the 38 dB peak of the Cf = 0 loop): the largest AC sample
+/// refined by a parabola through it and its neighbours, in dB over ln f;</item>
+/// <item>integrated output noise 2e-3 relative (worst seen 5.9e-4, the narrow-band electrode case): a trapezoid
+/// in f over ngspice's 1000-points-per-decade spectrum against SpecLint's integral;</item>
+/// <item>DC output 2e-10 V (worst seen 5e-11 V), with ngspice printing 12 significant digits.</item>
+/// </list>
+/// Without ngspice the tests are skipped, except under CI, where they fail.
 /// </summary>
 public sealed class NgspiceCrossCheckTests(ITestOutputHelper output)
 {
     public static TheoryData<string> Cases => [.. NgspiceCases.All.Keys];
 
-    [Theory]
+    [SkippableTheory]
     [MemberData(nameof(Cases))]
     public void Analysis_agrees_with_ngspice(string name)
     {
-        if (NgspiceRun.Executable is null)
-        {
-            Assert.False(
-                string.Equals(Environment.GetEnvironmentVariable("CI"), "true", StringComparison.OrdinalIgnoreCase),
-                "ngspice is not on PATH; CI must install it (Debian package ngspice)");
-            output.WriteLine("ngspice is not on PATH: cross-check not run (install the Debian package ngspice).");
-            return;
-        }
+        ExternalTool.Require(NgspiceRun.Executable, "ngspice", "apt-get install -y ngspice");
 
         var c = NgspiceCases.All[name];
         var r = TiaAnalyzer.Analyze(c, AnalysisOptions.Default);
@@ -39,10 +46,14 @@ public sealed class NgspiceCrossCheckTests(ITestOutputHelper output)
         output.WriteLine($"|Zt(0)| ours {r.Transimpedance.Ohms:G8} ngspice {zt0:G8}");
         Assert.Equal(1, r.Transimpedance.Ohms / zt0, 1e-4);
 
+        var peakDb = PeakDb(f, [.. run.Transimpedance.Select(z => z.Magnitude)]);
+        output.WriteLine($"peaking ours {r.PeakingDb:F8} dB ngspice {peakDb:F8} dB");
+        Assert.Equal(peakDb, r.PeakingDb, 2e-4);
+
         var bw = FirstFall(f, run.Transimpedance.Select(z => Math.Log(z.Magnitude / (zt0 / Math.Sqrt(2)))).ToArray());
-        output.WriteLine($"f-3dB ours {r.Bandwidth?.Hertz:G8} ngspice {bw:G8}");
+        output.WriteLine($"f-3dB ours {r.Bandwidth?.Hertz:G12} ngspice {bw:G12}");
         Assert.NotNull(bw);
-        Assert.Equal(1, r.Bandwidth!.Value.Hertz / bw.Value, 0.01);
+        Assert.Equal(1, r.Bandwidth!.Value.Hertz / bw.Value, 2e-4);
 
         var logT = run.LoopGain.Select(t => Math.Log(t.Magnitude)).ToArray();
         var phase = Unwrap(run.LoopGain);
@@ -59,19 +70,45 @@ public sealed class NgspiceCrossCheckTests(ITestOutputHelper output)
             var (i, fc) = (crossings[falling].Index, crossings[falling].Hz);
             var ph = Interpolate(f[i - 1], f[i], phase[i - 1], phase[i], fc);
             var pm = 180 + (ph * 180 / Math.PI);
-            output.WriteLine($"PM ours {r.PhaseMargin?.Degrees:F4}° ngspice {pm:F4}°, fc ours {r.Crossover?.Hertz:G8} ngspice {fc:G8}");
-            Assert.Equal(pm, r.PhaseMargin!.Value.Degrees, 0.5);
-            Assert.Equal(1, r.Crossover!.Value.Hertz / fc, 0.01);
+            output.WriteLine($"PM ours {r.PhaseMargin?.Degrees:F7}° ngspice {pm:F7}°, fc ours {r.Crossover?.Hertz:G12} ngspice {fc:G12}");
+            Assert.Equal(pm, r.PhaseMargin!.Value.Degrees, 5e-6);
+            Assert.Equal(1, r.Crossover!.Value.Hertz / fc, 1e-7);
         }
 
         output.WriteLine($"noise rms ours {noise.OutputRms.Volts:G8} ngspice {run.NoiseRmsVolts:G8} (its own total {run.NgspiceTotalVolts:G8}) over {noise.BandLow.Hertz} Hz .. {noise.BandHigh.Hertz} Hz");
-        Assert.Equal(1, noise.OutputRms.Volts / run.NoiseRmsVolts, 0.02);
+        Assert.Equal(1, noise.OutputRms.Volts / run.NoiseRmsVolts, 2e-3);
 
         var dcMin = run.DcOutputs.Min();
         var dcMax = run.DcOutputs.Max();
-        output.WriteLine($"DC ours {r.Output.MinExact.Volts:G8} .. {r.Output.MaxExact.Volts:G8} ngspice {dcMin:G8} .. {dcMax:G8}; ideal {r.Output.Min.Volts:G8} .. {r.Output.Max.Volts:G8}");
-        Assert.Equal(dcMin, r.Output.MinExact.Volts, 1e-3);
-        Assert.Equal(dcMax, r.Output.MaxExact.Volts, 1e-3);
+        output.WriteLine($"DC ours {r.Output.MinExact.Volts:G12} .. {r.Output.MaxExact.Volts:G12} ngspice {dcMin:G12} .. {dcMax:G12}; ideal {r.Output.Min.Volts:G8} .. {r.Output.Max.Volts:G8}");
+        Assert.Equal(dcMin, r.Output.MinExact.Volts, 2e-10);
+        Assert.Equal(dcMax, r.Output.MaxExact.Volts, 2e-10);
+    }
+
+    /// <summary>
+    /// Peaking in dB from sampled |Zt|: 0 when the largest sample is the first (the maximum is at DC), otherwise
+    /// the vertex of the parabola through the largest sample and its neighbours, in dB over ln f.
+    /// </summary>
+    internal static double PeakDb(double[] f, double[] magnitude)
+    {
+        var db = magnitude.Select(m => 20 * Math.Log10(m / magnitude[0])).ToArray();
+        var k = Array.IndexOf(db, db.Max());
+        if (k == 0 || k == db.Length - 1)
+        {
+            return Math.Max(0, db[k]);
+        }
+
+        var (x0, x1, x2) = (Math.Log(f[k - 1]), Math.Log(f[k]), Math.Log(f[k + 1]));
+        var (y0, y1, y2) = (db[k - 1], db[k], db[k + 1]);
+        var a = (((y2 - y1) / (x2 - x1)) - ((y1 - y0) / (x1 - x0))) / (x2 - x0);
+        var b = ((y1 - y0) / (x1 - x0)) - (a * (x0 + x1));
+        if (a >= 0)
+        {
+            return y1;
+        }
+
+        var xv = -b / (2 * a);
+        return y1 + (a * (xv - x1) * (xv - x1)) + (((2 * a * x1) + b) * (xv - x1));
     }
 
     internal static double? FirstFall(double[] f, double[] g)

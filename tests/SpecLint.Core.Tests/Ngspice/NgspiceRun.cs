@@ -28,14 +28,14 @@ internal sealed partial class NgspiceRun
 
     public double[] DcOutputs { get; }
 
-    /// <summary>Trapezoid integral of ngspice's output noise spectrum (agrees with its total to 1e-7, REFERENCE §2).</summary>
+    /// <summary>Trapezoid integral of ngspice's output noise spectrum (agrees with its total to 1e-7, references.md §2).</summary>
     public double NoiseRmsVolts { get; }
 
     /// <summary>ngspice's own onoise_total (may be NaN).</summary>
     public double NgspiceTotalVolts { get; }
 
     /// <summary>Where ngspice lives, or null when it is not on PATH.</summary>
-    public static string? Executable { get; } = Find();
+    public static string? Executable { get; } = SpecLint.Tests.Shared.ExternalTool.OnPath("ngspice");
 
     public static NgspiceRun Execute(string netlist)
     {
@@ -59,7 +59,7 @@ internal sealed partial class NgspiceRun
                 throw new TimeoutException("ngspice did not finish in 60 s");
             }
 
-            // The exit status is 1 whenever .control runs without .print (REFERENCE §2): judge from the log.
+            // The exit status is 1 whenever .control runs without .print (references.md §2): judge from the log.
             var bad = log.Split('\n').Select(l => l.Trim().ToLowerInvariant())
                 .FirstOrDefault(l => l.StartsWith("error", StringComparison.Ordinal) || l.StartsWith("fatal", StringComparison.Ordinal)
                     || l.StartsWith("singular matrix", StringComparison.Ordinal) || l.StartsWith("timestep too small", StringComparison.Ordinal));
@@ -113,19 +113,6 @@ internal sealed partial class NgspiceRun
     private static double Parse(string s) =>
         s.Contains("nan", StringComparison.OrdinalIgnoreCase) ? double.NaN : double.Parse(s, NumberStyles.Float, CultureInfo.InvariantCulture);
 
-    private static string? Find()
-    {
-        foreach (var d in (Environment.GetEnvironmentVariable("PATH") ?? "").Split(Path.PathSeparator))
-        {
-            var f = Path.Combine(d, "ngspice");
-            if (d.Length > 0 && File.Exists(f))
-            {
-                return f;
-            }
-        }
-
-        return null;
-    }
 
     [GeneratedRegex(@"^v\(od(\d)\)\s*=\s*(\S+)", RegexOptions.Multiline)]
     private static partial Regex DcLine();

@@ -55,7 +55,7 @@ public sealed class CornerSearchTests
             }
         }
 
-        // The minima sit at vertices (REFERENCE §4 item 13), which the grid contains: equal to rounding.
+        // The minima sit at vertices (references.md §4 item 13), which the grid contains: equal to rounding.
         Assert.Equal(pmMin, r.PhaseMarginMin!.Value.Degrees, 1e-9);
         Assert.Equal(bwMin, r.BandwidthMin!.Value.Hertz, bwMin * 1e-12);
         // The maxima may lie between grid points: the search must find at least as much.
@@ -81,7 +81,7 @@ public sealed class CornerSearchTests
     [Fact]
     public void The_worst_phase_margin_corner_names_low_Cf_and_high_sensor_capacitance()
     {
-        // Less Cf and more Cin move the 1/β zero down and raise the noise-gain plateau: less margin ([G], REFERENCE §1 row 4).
+        // Less Cf and more Cin move the 1/β zero down and raise the noise-gain plateau: less margin ([G], references.md §1 row 4).
         var r = ToleranceAnalyzer.Analyze(FiveSpreads(), ToleranceOptions.CornersOnly)!;
         var at = r.PhaseMarginMinAt.Settings.ToDictionary(s => s.Label, s => s.End);
         Assert.Equal(CornerEnd.Low, at["Cf"]);
@@ -90,7 +90,7 @@ public sealed class CornerSearchTests
     }
 
     /// <summary>
-    /// PM against GBW with a fixed second pole (REFERENCE §4 item 13): at low GBW the crossover sits below the
+    /// PM against GBW with a fixed second pole (references.md §4 item 13): at low GBW the crossover sits below the
     /// 1/β pole where the noise gain still rises, at high GBW it runs into the second pole; the margin peaks between.
     /// </summary>
     private static TiaSpec GbwSweep() => Channel(
@@ -127,7 +127,7 @@ public sealed class CornerSearchTests
     [Fact]
     public void A_corner_where_the_loop_gain_never_reaches_one_makes_the_minimum_undefined()
     {
-        // REFERENCE §4 item 1: undefined when A0·Rsh/(Rsh + Rf) < 1; 5 × 0.1/1.1 = 0.45 at Rsh = 100 kΩ, 4.5 at 10 MΩ.
+        // references.md §4 item 1: undefined when A0·Rsh/(Rsh + Rf) < 1; 5 × 0.1/1.1 = 0.45 at Rsh = 100 kΩ, 4.5 at 10 MΩ.
         var spec = Channel(
             rsh: new Spread<Resistance>(new Resistance(1e6), new Resistance(100e3), new Resistance(10e6), ToleranceForm.Range),
             a0: new Gain(5));
@@ -174,7 +174,7 @@ public sealed class CornerSearchTests
     [Fact]
     public void The_dielectric_is_a_separate_factor_on_top_of_Cf_tolerance()
     {
-        // REFERENCE §4 item 13: the dielectric and Cf's own tolerance are separate factors; X7R ±15 % (§3.6).
+        // references.md §4 item 13: the dielectric and Cf's own tolerance are separate factors; X7R ±15 % (§3.6).
         var spec = Channel(cf: Rel<Capacitance>(10e-12, 5), dielectric: "X7R", temperature: Range(-10, 60));
         var r = ToleranceAnalyzer.Analyze(spec, ToleranceOptions.CornersOnly)!;
         var d = r.VariedParameters.Single(p => p.Pointer == "/feedback/dielectric");
@@ -187,7 +187,7 @@ public sealed class CornerSearchTests
     [Fact]
     public void A_letter_code_C_on_a_small_capacitor_is_an_absolute_quarter_picofarad()
     {
-        // REFERENCE §3.5 (IEC 60062, from memory): 0.68 pF "C" means ±0.25 pF, which is ±37 %.
+        // references.md §3.5 (IEC 60062, from memory): 0.68 pF "C" means ±0.25 pF, which is ±37 %.
         var parsed = QuantityParser.Parse("0.68 pF C", Dimension.Capacitance);
         var spec = Channel(cf: Spread<Capacitance>.From(parsed));
         var r = ToleranceAnalyzer.Analyze(spec, ToleranceOptions.CornersOnly)!;

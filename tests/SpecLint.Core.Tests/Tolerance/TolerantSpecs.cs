@@ -18,7 +18,7 @@ internal static class TolerantSpecs
     public static Spread<Temperature> Range(double lowCelsius, double highCelsius) =>
         new(Temperature.FromCelsius((lowCelsius + highCelsius) / 2), Temperature.FromCelsius(lowCelsius), Temperature.FromCelsius(highCelsius), ToleranceForm.Range);
 
-    /// <summary>A photodiode channel (DESIGN §3 example values) with the spreads given; everything else exact.</summary>
+    /// <summary>A photodiode channel (references.md §D3 example values) with the spreads given; everything else exact.</summary>
     public static TiaSpec Channel(
         Spread<Resistance>? rf = null,
         Spread<Capacitance>? cf = null,

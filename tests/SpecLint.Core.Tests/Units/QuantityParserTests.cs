@@ -34,6 +34,8 @@ public sealed class QuantityParserTests
             QuantityParser.Parse(QuantityFormat.Format(value, Dimension.Capacitance), Dimension.Capacitance).Typ == value);
     }
 
+    // Letter codes: C = ±0.25 pF absolute below 10 pF, J = ±5 % (references.md §3.5, [IEC60062], from memory).
+    // RKM: "2p2" = 2.2 pF ([IEC60062], from memory).
     [Theory]
     [InlineData("12 pF ±5%", 12e-12, 11.4e-12, 12.6e-12, ToleranceForm.Relative)]
     [InlineData("2.2 pF ±0.25 pF", 2.2e-12, 1.95e-12, 2.45e-12, ToleranceForm.Absolute)]
@@ -115,6 +117,8 @@ public sealed class QuantityParserTests
         Assert.Equal(115, Gain.FromSi(QuantityParser.Parse("115 dB", Dimension.Gain).Typ).Decibels, 1e-9);
     }
 
+    // The letters SpecLint reads are those of references.md §3.5 (B C D F G J K M, W N Z); any other letter,
+    // such as Q, is refused. Whether a letter exists in IEC 60062 is not claimed here.
     [Theory]
     [InlineData("2.2", Dimension.Capacitance, "\"2.2\" has no unit; a capacitance needs one, e.g. \"2.2 pF\"")]
     [InlineData("", Dimension.Capacitance, "empty value")]
@@ -122,7 +126,7 @@ public sealed class QuantityParserTests
     [InlineData("8 Mhz", Dimension.Frequency, "did you mean \"8 MHz\"?")]
     [InlineData("0.2 A", Dimension.Voltage, "is a current, but this key takes a voltage")]
     [InlineData("2.2 pF J", Dimension.Capacitance, "letter 'J' has no meaning below 10 pF")]
-    [InlineData("12 pF Q", Dimension.Capacitance, "'Q' is not an IEC 60062 tolerance letter")]
+    [InlineData("12 pF Q", Dimension.Capacitance, "'Q' is not a tolerance letter SpecLint reads")]
     [InlineData("5 V J", Dimension.Voltage, "letter codes apply to resistors and capacitors only")]
     [InlineData("3 pF .. 1 pF", Dimension.Capacitance, "the range runs backwards")]
     [InlineData("1 pF ±5% .. 3 pF", Dimension.Capacitance, "a range cannot also carry a tolerance")]
@@ -138,6 +142,7 @@ public sealed class QuantityParserTests
         Assert.Contains(fragment, e.Message, StringComparison.Ordinal);
     }
 
+    // F = ±1 % at and above 10 pF and for resistors (references.md §3.5, [IEC60062], from memory): 4.7 kΩ − 1 % = 4653 Ω.
     [Fact]
     public void Letter_code_F_after_an_rkm_code_is_a_tolerance_not_farads()
     {

@@ -4,8 +4,8 @@ using SpecLint.Reporting.Plots;
 namespace SpecLint.Reporting.Tests.Plots;
 
 /// <summary>
-/// Sweeps of the DESIGN §3 example channel (8 MHz op-amp, 1 MΩ ∥ 2.35 pF, 17.8 pF at the summing node), computed
-/// here with the DESIGN §4 model so the charts get realistic shapes. Test data only: reporters never compute physics.
+/// Sweeps of the references.md §D3 example channel (8 MHz op-amp, 1 MΩ ∥ 2.35 pF, 17.8 pF at the summing node), computed
+/// here with the references.md §D4 model so the charts get realistic shapes. Test data only: reporters never compute physics.
 /// </summary>
 internal static class SampleChannel
 {

@@ -109,10 +109,10 @@ public sealed class SarifWriterTests
 
         var pm = rules.Single(r => r.GetProperty("id").GetString() == "phase-margin");
         Assert.Equal("PhaseMargin", pm.GetProperty("name").GetString());
-        Assert.StartsWith("A channel whose loop gain T = A·β has less phase margin", pm.GetProperty("fullDescription").GetProperty("text").GetString(), StringComparison.Ordinal);
+        Assert.StartsWith("PM = 180° + ∠T(f_c) ≥ floor, where T = A·β is the loop gain", pm.GetProperty("fullDescription").GetProperty("text").GetString(), StringComparison.Ordinal);
         Assert.StartsWith("# phase-margin", pm.GetProperty("help").GetProperty("markdown").GetString(), StringComparison.Ordinal);
         Assert.DoesNotContain("##", pm.GetProperty("help").GetProperty("text").GetString(), StringComparison.Ordinal);
-        Assert.Equal("https://github.com/speclint/speclint/blob/main/rules/phase-margin/phase-margin.md", pm.GetProperty("helpUri").GetString());
+        Assert.Equal("https://speclint.invalid/rules/phase-margin/phase-margin.md", pm.GetProperty("helpUri").GetString());
         Assert.Equal("error", pm.GetProperty("defaultConfiguration").GetProperty("level").GetString());
         var unmatched = rules.Single(r => r.GetProperty("id").GetString() == RuleIds.WaiverUnmatched);
         Assert.Equal("warning", unmatched.GetProperty("defaultConfiguration").GetProperty("level").GetString());

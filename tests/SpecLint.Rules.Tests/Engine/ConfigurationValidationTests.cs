@@ -23,7 +23,7 @@ public sealed class ConfigurationValidationTests
     [Fact]
     public void Accepts_the_configuration_of_the_design()
     {
-        // DESIGN §8's example.
+        // references.md §D8's example.
         Lint.LoadConfig("""
             include: ["**/*.tia.yaml"]
             fail-on: error

@@ -5,7 +5,7 @@ namespace SpecLint.Rules.Tests.Engine;
 
 public sealed class RuleCatalogTests
 {
-    // DESIGN §7: the built-in rule ids are a contract.
+    // references.md §D7: the built-in rule ids are a contract.
     private static readonly string[] ContractIds =
     [
         "bandwidth", "capacitor-tolerance", "feedback-capacitor-size", "high-voltage", "min-stable-gain", "noise-floor",

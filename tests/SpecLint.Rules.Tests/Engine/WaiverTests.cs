@@ -6,7 +6,7 @@ namespace SpecLint.Rules.Tests.Engine;
 
 public sealed class WaiverTests
 {
-    // The worked example of REFERENCE §3.2 with Cf = 0.5 pF: phase margin 23°, below the 45° floor.
+    // The worked example of references.md §3.2 with Cf = 0.5 pF: phase margin 23°, below the 45° floor.
     private static string Channel(string waivers) => $$"""
         {{Parts.Header}}
         conditions: { temperature: 25 °C, supply: { positive: 15 V, negative: -15 V } }

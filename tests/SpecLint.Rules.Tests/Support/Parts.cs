@@ -15,7 +15,7 @@ internal static class Parts
 
     /// <summary>
     /// A quiet single-pole op-amp with no DC errors and no input capacitance, so hand computations hold:
-    /// 10 MHz GBW and A0 = 1e9 (180 dB) as in REFERENCE §3.2's worked example.
+    /// 10 MHz GBW and A0 = 1e9 (180 dB) as in references.md §3.2's worked example.
     /// </summary>
     public const string IdealAmp = """
         amplifier:

@@ -3,22 +3,22 @@ namespace SpecLint.Rules.Tests.Support;
 /// <summary>Independent reference numbers for the physics checks; each names its source.</summary>
 internal static class Reference
 {
-    /// <summary>Boltzmann constant, J/K: CODATA 2018 / SI Brochure 9th ed., exact (REFERENCE [C]).</summary>
+    /// <summary>Boltzmann constant, J/K: CODATA 2018 / SI Brochure 9th ed., exact (references.md [C]).</summary>
     public const double K = 1.380649e-23;
 
-    /// <summary>Elementary charge, C: CODATA 2018 / SI Brochure 9th ed., exact (REFERENCE [C]).</summary>
+    /// <summary>Elementary charge, C: CODATA 2018 / SI Brochure 9th ed., exact (references.md [C]).</summary>
     public const double Q = 1.602176634e-19;
 
-    /// <summary>2kT/q in volts (REFERENCE §1 row 11, the "2kT/e" rule of Hobbs ch. 18, from memory).</summary>
+    /// <summary>2kT/q in volts (references.md §1 row 11, the "2kT/e" rule of Hobbs ch. 18, from memory).</summary>
     public static double TwoKtOverQ(double kelvin) => 2 * K * kelvin / Q;
 
-    /// <summary>E12 mantissas, REFERENCE §3.4 (IEC 60063, values from memory).</summary>
+    /// <summary>E12 mantissas, references.md §3.4 (IEC 60063, values from memory).</summary>
     public static readonly double[] E12 = [1.0, 1.2, 1.5, 1.8, 2.2, 2.7, 3.3, 3.9, 4.7, 5.6, 6.8, 8.2];
 
-    /// <summary>E24 mantissas, REFERENCE §3.4 (IEC 60063, values from memory).</summary>
+    /// <summary>E24 mantissas, references.md §3.4 (IEC 60063, values from memory).</summary>
     public static readonly double[] E24 = [1.0, 1.1, 1.2, 1.3, 1.5, 1.6, 1.8, 2.0, 2.2, 2.4, 2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 5.1, 5.6, 6.2, 6.8, 7.5, 8.2, 9.1];
 
-    /// <summary>E96 mantissas: REFERENCE §3.4 states E96 = round(10^(i/96), 2) for all 96 values.</summary>
+    /// <summary>E96 mantissas: references.md §3.4 states E96 = round(10^(i/96), 2) for all 96 values.</summary>
     public static readonly double[] E96 = [.. Enumerable.Range(0, 96).Select(i => Math.Round(Math.Pow(10, i / 96.0), 2))];
 
     /// <summary>All values of a series over the decades 1e-15 … 1e12.</summary>
@@ -38,7 +38,7 @@ internal static class Reference
 
     /// <summary>
     /// Phase margin in degrees of the ideal-op-amp-limit TIA loop T = (ωt/s)·(1 + s·Rf·Cf)/(1 + s·Rf·(Cin + Cf))
-    /// (REFERENCE §1 rows 1–5 with A0 → ∞, no second pole, Rsh = ∞): PM = 90° + atan(ω·Rf·Cf) − atan(ω·Rf·(Cin + Cf))
+    /// (references.md §1 rows 1–5 with A0 → ∞, no second pole, Rsh = ∞): PM = 90° + atan(ω·Rf·Cf) − atan(ω·Rf·(Cin + Cf))
     /// at |T| = 1, found by bisection on a log scale.
     /// </summary>
     public static double PhaseMarginDeg(double cin, double rf, double cf, double gbw)

@@ -4,7 +4,7 @@ namespace SpecLint.Core.Analysis.Tolerance;
 
 /// <summary>
 /// Worst-case search over the tolerance box: every vertex of the loop-affecting axes, then a coordinate-wise
-/// search inside the box from the most extreme vertex of each figure (REFERENCE §4 item 13: minima of phase
+/// search inside the box from the most extreme vertex of each figure (references.md §4 item 13: minima of phase
 /// margin and bandwidth sat at vertices in every case tried, maxima can lie inside).
 /// </summary>
 /// <remarks>

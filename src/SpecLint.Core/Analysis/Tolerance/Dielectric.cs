@@ -5,7 +5,7 @@ namespace SpecLint.Core.Analysis.Tolerance;
 
 /// <summary>
 /// An EIA-198 ceramic dielectric code and the capacitance change it allows over temperature
-/// (REFERENCE §3.6; the codes are from memory, EIA-198 and IEC 60384-8/-9 were not consulted).
+/// (references.md §3.6; the codes are from memory, EIA-198 and IEC 60384-8/-9 were not consulted).
 /// </summary>
 /// <remarks>
 /// <para>Class 1 codes (C0G, NP0, U2J, P2H, ...) give a temperature coefficient and its tolerance:
@@ -15,7 +15,7 @@ namespace SpecLint.Core.Analysis.Tolerance;
 /// <para>Class 2 codes (X7R, X5R, Y5V, ...) give only a band the capacitance stays in over the rated range
 /// (first letter: low temperature, digit: high temperature, last letter: the band). The curve inside the
 /// band is not known, so the whole band is used as a conservative bound whenever the operating range is
-/// anything but 25 °C alone. DC-bias and ageing losses are not included (REFERENCE §3.6).</para>
+/// anything but 25 °C alone. DC-bias and ageing losses are not included (references.md §3.6).</para>
 /// </remarks>
 public sealed record Dielectric
 {

@@ -5,7 +5,7 @@ namespace SpecLint.Core.Analysis.Tolerance;
 
 /// <summary>
 /// The spread of a spec's phase margin, bandwidth and peaking over its part tolerances and temperature range
-/// (REFERENCE §1 "Tolerances", §4 items 13–14), and optionally a seeded Monte Carlo yield.
+/// (references.md §1 "Tolerances", §4 items 13–14), and optionally a seeded Monte Carlo yield.
 /// </summary>
 /// <remarks>
 /// <para>Varied: every spread in the spec — Rf, Cf (its own tolerance, IEC 60062 letter codes absolute below
@@ -18,7 +18,7 @@ namespace SpecLint.Core.Analysis.Tolerance;
 /// most extreme vertex of each figure (<see cref="CornerSearch"/>). Past
 /// <see cref="ToleranceOptions.MaxVertexParameters"/> loop parameters only the most influential are enumerated.</para>
 /// </remarks>
-public static class ToleranceAnalyzer
+internal static class ToleranceAnalyzer
 {
     /// <summary>Analyses the tolerances of a spec; null when nothing in it varies.</summary>
     /// <param name="spec">The spec.</param>

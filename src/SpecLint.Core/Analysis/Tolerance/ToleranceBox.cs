@@ -121,7 +121,7 @@ internal sealed class ToleranceBox
         return c with
         {
             Rf = new Resistance(rf),
-            // The dielectric's temperature change and Cf's own tolerance are separate factors (REFERENCE §4 item 13).
+            // The dielectric's temperature change and Cf's own tolerance are separate factors (references.md §4 item 13).
             Cf = new Capacitance(cf * cfFactor),
             Cpar = new Capacitance(cpar),
             SensorCapacitance = new Capacitance(cs),

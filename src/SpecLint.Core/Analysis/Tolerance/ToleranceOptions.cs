@@ -4,7 +4,7 @@ using SpecLint.Core.Units;
 namespace SpecLint.Core.Analysis.Tolerance;
 
 /// <summary>What <see cref="ToleranceAnalyzer.Analyze(Spec.Model.TiaSpec, ToleranceOptions)"/> computes, and how.</summary>
-public sealed record ToleranceOptions
+internal sealed record ToleranceOptions
 {
     /// <summary>Corners only, no Monte Carlo: the cheap setting fix re-checks use.</summary>
     public static ToleranceOptions CornersOnly { get; } = new();
@@ -37,7 +37,7 @@ public sealed record ToleranceOptions
     /// </summary>
     public int MaxVertexParameters { get; init; } = 12;
 
-    /// <summary>Whether to search inside the box for interior extremes (REFERENCE §4 item 13); on by default.</summary>
+    /// <summary>Whether to search inside the box for interior extremes (references.md §4 item 13); on by default.</summary>
     public bool SearchInterior { get; init; } = true;
 
     /// <summary>Threads for Monte Carlo; -1 (the default) for all cores. Results do not depend on it.</summary>

@@ -5,7 +5,7 @@ namespace SpecLint.Core.Analysis.Tolerance;
 
 /// <summary>
 /// The spread a real build will see: extremes over the tolerance box (every vertex plus a search inside
-/// it, REFERENCE §4 item 13) with the corner that gives each, and optionally a Monte Carlo run.
+/// it, references.md §4 item 13) with the corner that gives each, and optionally a Monte Carlo run.
 /// </summary>
 /// <param name="VariedParameters">The parameters varied, in a stable order.</param>
 /// <param name="PhaseMarginMin">The smallest phase margin; null when the loop gain never reaches 1 at some corner.</param>

@@ -9,7 +9,7 @@ namespace SpecLint.Core.Spec.Model;
 public sealed record Conditions(Spread<Temperature> Temperature, Spread<Voltage> SupplyPositive, Spread<Voltage> SupplyNegative)
 {
     /// <summary>
-    /// The temperature nominal metrics use (DESIGN §5): 25 °C when it lies in the range, the single value
+    /// The temperature nominal metrics use (references.md §D5): 25 °C when it lies in the range, the single value
     /// when one is given, otherwise the middle of the range.
     /// </summary>
     public Temperature Nominal

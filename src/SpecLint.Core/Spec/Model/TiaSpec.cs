@@ -3,7 +3,7 @@ using SpecLint.Core.Units;
 
 namespace SpecLint.Core.Spec.Model;
 
-/// <summary>One transimpedance front-end channel as written in a spec file (DESIGN §3), typed and immutable.</summary>
+/// <summary>One transimpedance front-end channel as written in a spec file (references.md §D3), typed and immutable.</summary>
 /// <param name="File">The path the spec was read from, as given on the command line (used in every message).</param>
 /// <param name="FormatVersion">The <c>spec</c> key.</param>
 /// <param name="Kind">The <c>kind</c> key; "transimpedance" in v1.</param>

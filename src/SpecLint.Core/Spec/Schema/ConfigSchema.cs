@@ -3,8 +3,8 @@ using System.Text.Json.Nodes;
 
 namespace SpecLint.Core.Spec.Schema;
 
-/// <summary>The JSON Schema (draft-07) of the repository configuration <c>.speclint.yaml</c> (DESIGN §8), embedded in the library.</summary>
-public static class ConfigSchema
+/// <summary>The JSON Schema (draft-07) of the repository configuration <c>.speclint.yaml</c> (references.md §D8), embedded in the library.</summary>
+internal static class ConfigSchema
 {
     private static readonly Lazy<SchemaValidator> Validator = new(() => new SchemaValidator("config.schema.json"));
 

@@ -1,7 +1,7 @@
 namespace SpecLint.Core.Spec.Schema;
 
 /// <summary>Levenshtein distance, for did-you-mean hints on misspelt keys and values.</summary>
-public static class EditDistance
+internal static class EditDistance
 {
     /// <summary>The number of single-character edits that turn <paramref name="a"/> into <paramref name="b"/>.</summary>
     public static int Between(string a, string b)

@@ -5,4 +5,4 @@ namespace SpecLint.Core.Spec.Schema;
 /// <param name="Keyword">The JSON Schema keyword that failed (type, required, additionalProperties, ...).</param>
 /// <param name="Message">Plain-English message with an example of the fix.</param>
 /// <param name="Location">Where to report it: the value, the key that holds it, or the parent that lacks a key.</param>
-public sealed record SchemaViolation(string Pointer, string Keyword, string Message, ViolationLocation Location);
+internal sealed record SchemaViolation(string Pointer, string Keyword, string Message, ViolationLocation Location);

@@ -3,8 +3,8 @@ using System.Text.Json.Nodes;
 
 namespace SpecLint.Core.Spec.Schema;
 
-/// <summary>The JSON Schema (draft-07) of spec files (DESIGN §3), embedded in the library.</summary>
-public static class SpecSchema
+/// <summary>The JSON Schema (draft-07) of spec files (references.md §D3), embedded in the library.</summary>
+internal static class SpecSchema
 {
     private static readonly Lazy<SchemaValidator> Validator = new(() => new SchemaValidator("spec.schema.json"));
 

@@ -1,7 +1,7 @@
 namespace SpecLint.Core.Spec.Schema;
 
 /// <summary>Which part of the file a schema message should point at.</summary>
-public enum ViolationLocation
+internal enum ViolationLocation
 {
     /// <summary>The value at the pointer.</summary>
     Value,

@@ -3,7 +3,7 @@ using System.Text;
 namespace SpecLint.Core.Spec.Yaml;
 
 /// <summary>RFC 6901 JSON Pointer text helpers and the dotted key path messages show.</summary>
-public static class JsonPointerText
+internal static class JsonPointerText
 {
     /// <summary>Appends one reference token, escaping '~' and '/' as RFC 6901 requires.</summary>
     public static string Append(string pointer, string token)

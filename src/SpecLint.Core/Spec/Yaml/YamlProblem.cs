@@ -5,4 +5,4 @@ namespace SpecLint.Core.Spec.Yaml;
 /// <param name="Column">1-based column.</param>
 /// <param name="Pointer">JSON Pointer of the node concerned ("" for the whole file).</param>
 /// <param name="Message">Plain-English message that says how to fix it.</param>
-public sealed record YamlProblem(int Line, int Column, string Pointer, string Message);
+internal sealed record YamlProblem(int Line, int Column, string Pointer, string Message);

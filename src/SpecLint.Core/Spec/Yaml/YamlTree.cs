@@ -4,7 +4,7 @@ using System.Text.Json.Nodes;
 namespace SpecLint.Core.Spec.Yaml;
 
 /// <summary>A YAML document read as a JSON tree, with the source position of every node.</summary>
-public sealed class YamlTree
+internal sealed class YamlTree
 {
     internal YamlTree(JsonNode? root, bool hasRoot, IReadOnlyDictionary<string, SourcePosition> positions,
         IReadOnlyDictionary<string, string> scalarText, ImmutableArray<YamlProblem> problems)

@@ -20,7 +20,7 @@ namespace SpecLint.Core.Spec.Yaml;
 /// one-line error. Depth is checked on every start event, before any recursion, so a file of a million
 /// <c>[</c> stops at the 65th.
 /// </remarks>
-public static partial class YamlTreeReader
+internal static partial class YamlTreeReader
 {
     /// <summary>Largest file accepted, checked before parsing (1 MiB).</summary>
     public const int MaxFileBytes = 1024 * 1024;
