@@ -8,7 +8,7 @@ namespace SpecLint.Core.Files;
 /// the temporary file is renamed over the target. An interrupted run leaves the old file (and at worst a
 /// stray <c>.*.tmp</c> beside it); two runs writing the same target leave one complete result.
 /// </summary>
-public static class AtomicFile
+internal static class AtomicFile
 {
     private static readonly UTF8Encoding Utf8 = new(encoderShouldEmitUTF8Identifier: false);
 

@@ -7,7 +7,7 @@ namespace SpecLint.Core.Files;
 /// claims (a device or a file growing under us claims nothing useful). Pipes, devices, sockets and folders
 /// are refused before they are opened.
 /// </summary>
-public static class BoundedFileReader
+internal static class BoundedFileReader
 {
     /// <summary>Reads at most <paramref name="maxBytes"/> bytes; false with a message that needs no file name in front.</summary>
     public static bool TryRead(string path, int maxBytes, out byte[] bytes, out string error)

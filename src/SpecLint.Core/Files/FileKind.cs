@@ -1,7 +1,7 @@
 namespace SpecLint.Core.Files;
 
 /// <summary>What a path names, as far as SpecLint cares: only regular files are ever opened for reading.</summary>
-public enum FileKind
+internal enum FileKind
 {
     /// <summary>Nothing at this path (or a dangling symbolic link).</summary>
     Missing,

@@ -13,7 +13,7 @@ namespace SpecLint.Core.Files;
 /// status record starts with two 32-bit fields (flags, then the POSIX mode). On Windows there are no named
 /// pipes or devices in the file namespace that a spec path could name, so attributes suffice.
 /// </remarks>
-public static class FileKinds
+internal static class FileKinds
 {
     private const int TypeMask = 0xF000;
     private const int RegularType = 0x8000;

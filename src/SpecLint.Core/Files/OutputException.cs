@@ -1,7 +1,7 @@
 namespace SpecLint.Core.Files;
 
 /// <summary>An output that could not be written; its message is ready for the user (path and reason).</summary>
-public sealed class OutputException : IOException
+internal sealed class OutputException : IOException
 {
     /// <summary>Creates the exception for <paramref name="path"/> with a reason.</summary>
     public OutputException(string path, string reason)

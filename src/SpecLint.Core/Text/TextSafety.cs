@@ -9,7 +9,7 @@ namespace SpecLint.Core.Text;
 /// reviewer reads. Every such character is shown as a visible escape instead (<c>\n</c>, <c>\x1B</c>,
 /// <c>\u202E</c>), so the text stays on one line and means what it shows.
 /// </summary>
-public static class TextSafety
+internal static class TextSafety
 {
     /// <summary>The text with every control, line-separator and direction-formatting character written as an escape.</summary>
     public static string ForTerminal(string? text)

@@ -7,7 +7,7 @@ namespace SpecLint.Rules.Engine;
 /// value (no tolerance), finite, and inside the range that makes sense for its dimension. A phase-margin
 /// floor of -5 deg would silently switch the gate off, so it is refused rather than obeyed.
 /// </summary>
-public static class OptionValues
+internal static class OptionValues
 {
     /// <summary>Parses and range-checks <paramref name="text"/> for <paramref name="option"/>; false with a message otherwise.</summary>
     public static bool TryRead(RuleOption option, string text, out double si, out string error)
