@@ -141,8 +141,7 @@ internal static class CheckCommand
                 run = run with { Acceptance = Acceptance.Apply(parse.GetValue(accepted)!, entries, run.Specs) };
             }
 
-            Outputs.Write(run, request, output);
-            return run.ExitCode;
+            return Outputs.Write(run, request, output, error);
         });
         return command;
     }
