@@ -1,5 +1,6 @@
 using System.Globalization;
 using SpecLint.Reporting.Markdown;
+using SpecLint.Reporting.Plots;
 using SpecLint.Rules.Changes;
 using SpecLint.Rules.Checking;
 
@@ -10,7 +11,8 @@ internal static class ChangesMarkdown
 {
     public const string Heading = "## What this change does";
 
-    public static IEnumerable<string> Lines(CheckRun run)
+    /// <summary>The section's lines; <paramref name="extras"/> holds the base-and-head charts by <see cref="ChangePlots.LinkKey"/>.</summary>
+    public static IEnumerable<string> Lines(CheckRun run, IReadOnlyDictionary<string, string>? extras = null)
     {
         ArgumentNullException.ThrowIfNull(run);
         if (run.Changes is not { } changes)
@@ -52,9 +54,14 @@ internal static class ChangesMarkdown
             yield return "";
         }
 
-        var lists = changes.Specs.Where(c => c.Findings.New.Length + c.Findings.Resolved.Length + c.BaseProblems.Length > 0).ToList();
-        foreach (var c in lists)
+        foreach (var c in changes.Specs)
         {
+            var plots = extras?.GetValueOrDefault(ChangePlots.LinkKey(c.File));
+            if (c.Findings.New.Length + c.Findings.Resolved.Length + c.BaseProblems.Length == 0 && plots is null)
+            {
+                continue;
+            }
+
             yield return $"**{MarkdownText.Cell(c.Name)}**";
             yield return "";
             foreach (var f in c.Findings.New)
@@ -73,6 +80,11 @@ internal static class ChangesMarkdown
             }
 
             yield return "";
+            if (plots is not null)
+            {
+                yield return plots.TrimEnd('\n');
+                yield return "";
+            }
         }
     }
 }

@@ -46,7 +46,7 @@ internal sealed class MarkdownReport
     {
         Line($"# {options.Title}");
         Line();
-        foreach (var line in ChangesMarkdown.Lines(_run))
+        foreach (var line in ChangesMarkdown.Lines(_run, options.Extras))
         {
             Line(line);
         }

@@ -50,6 +50,24 @@ internal static class PlotFiles
             links[spec.File] = md.ToString();
         }
 
+        foreach (var change in run.Changes?.Specs ?? [])
+        {
+            if (change.Before?.Analysis is not { } before || change.After?.Analysis is not { } after)
+            {
+                continue;
+            }
+
+            var md = new StringBuilder();
+            foreach (var (suffix, chart) in ChangePlots.Build(before, after, change.Name))
+            {
+                var file = $"{SafeName(change.Name)}.{suffix}.svg";
+                sink(file, SvgChartWriter.Write(chart with { Id = SafeName(change.Name) + "-" + suffix }));
+                md.Append("![").Append(chart.Title).Append("](").Append(plotFolderName).Append('/').Append(file).Append(")\n\n");
+            }
+
+            links[ChangePlots.LinkKey(change.File)] = md.ToString();
+        }
+
         return links;
     }
 

@@ -181,6 +181,16 @@ public sealed class AgainstTests
         Assert.True(section > 0 && section < md.IndexOf("## Summary", StringComparison.Ordinal));
         Assert.Contains("| ch-a | Phase margin |", md, StringComparison.Ordinal);
         Assert.Contains("| deleted |", md, StringComparison.Ordinal);
+
+        // Base and head drawn together for the changed spec; the added and deleted ones have one version only.
+        Assert.Contains("](report-plots/ch-a.change-loop-gain.svg)", md, StringComparison.Ordinal);
+        Assert.Contains("](report-plots/ch-a.change-noise.svg)", md, StringComparison.Ordinal);
+        Assert.DoesNotContain("ch-e.change-loop-gain.svg", md, StringComparison.Ordinal);
+        Assert.DoesNotContain("ch-c.change-loop-gain.svg", md, StringComparison.Ordinal);
+        var loop = File.ReadAllText(cli.Path_("out/report-plots/ch-a.change-loop-gain.svg"));
+        Assert.Contains("|T| base", loop, StringComparison.Ordinal);
+        Assert.Contains("|T| magnitude, this change", loop, StringComparison.Ordinal);
+        Assert.Contains("total, base", File.ReadAllText(cli.Path_("out/report-plots/ch-a.change-noise.svg")), StringComparison.Ordinal);
     }
 
     [Fact]
