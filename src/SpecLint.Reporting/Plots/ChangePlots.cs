@@ -10,7 +10,8 @@ namespace SpecLint.Reporting.Plots;
 /// </summary>
 internal static class ChangePlots
 {
-    private static readonly SeriesStyle BaseStyle = new(ChartPalette.MutedInk, "6 4", 1.6);
+    // Dotted and grey, so the base reads apart from the head series whatever their palette dashes.
+    private static readonly SeriesStyle BaseStyle = new(ChartPalette.MutedInk, "2 3", 1.6);
 
     /// <summary>The key under which <see cref="PlotFiles"/> hands a changed spec's chart links to the report.</summary>
     public static string LinkKey(string file) => "change:" + file;
@@ -24,7 +25,7 @@ internal static class ChangePlots
         var (baseMag, basePhase, baseNoise) = Curves(before, frequencies);
         var (headMag, headPhase, headNoise) = Curves(after, frequencies);
 
-        var loop = LoopGainChart.Build(frequencies, headMag, headPhase, after.Crossover?.Hertz, after.PhaseMargin?.Degrees, $"{specName}: loop gain, base (dashed) and this change");
+        var loop = LoopGainChart.Build(frequencies, headMag, headPhase, after.Crossover?.Hertz, after.PhaseMargin?.Degrees, $"{specName}: loop gain, base (dotted) and this change");
         loop = loop with
         {
             Series =
@@ -36,7 +37,7 @@ internal static class ChangePlots
         };
 
         var noise = NoiseDensityChart.Build(frequencies, [new NoiseContribution("total, this change", headNoise)], headNoise,
-            after.Noise?.BandLow.Hertz, after.Noise?.BandHigh.Hertz, $"{specName}: total output noise density, base (dashed) and this change");
+            after.Noise?.BandLow.Hertz, after.Noise?.BandHigh.Hertz, $"{specName}: total output noise density, base (dotted) and this change");
         noise = noise with
         {
             Series =

@@ -170,6 +170,31 @@ public sealed class AgainstTests
     }
 
     [Fact]
+    public void A_house_rule_change_rechecks_every_spec_unless_house_rules_are_off()
+    {
+        using var cli = new CliHarness();
+        GitRepo.Init(cli);
+        Assert.Equal(0, cli.Run("new-rule", "guard-ring-note").Exit);
+        cli.Write("hw/a.tia.yaml", Clean("ch-a"));
+        GitRepo.Commit(cli, "a channel and a house rule");
+        var rule = cli.Path_("house-rules/guard-ring-note/GuardRingNoteRule.cs");
+        File.AppendAllText(rule, "// reviewed\n");
+
+        var (_, output, error) = cli.Run("check", "--against", "HEAD", "--nominal-only", "--format", "json");
+        using (var doc = JsonDocument.Parse(output))
+        {
+            Assert.True(doc.RootElement.GetProperty("against").GetProperty("everySpec").GetBoolean(), error);
+            Assert.Equal("changed", Change(doc, "hw/a.tia.yaml").GetProperty("status").GetString());
+        }
+
+        var off = cli.Run("check", "--against", "HEAD", "--nominal-only", "--format", "json", "--no-house-rules");
+        using var offDoc = JsonDocument.Parse(off.Out);
+        Assert.False(offDoc.RootElement.GetProperty("against").GetProperty("everySpec").GetBoolean());
+        Assert.Equal(0, offDoc.RootElement.GetProperty("changes").GetArrayLength());
+        Assert.Equal(0, off.Exit);
+    }
+
+    [Fact]
     public void Terminal_and_markdown_show_the_deltas()
     {
         using var cli = TwoBranches();
