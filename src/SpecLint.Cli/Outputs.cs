@@ -7,6 +7,7 @@ using SpecLint.Reporting.Markdown;
 using SpecLint.Reporting.Plots;
 using SpecLint.Reporting.Sarif;
 using SpecLint.Reporting.Terminal;
+using SpecLint.Rules.Accepting;
 using SpecLint.Rules.Checking;
 using SpecLint.Rules.Engine;
 
@@ -125,7 +126,8 @@ internal static class Outputs
     }
 
     /// <summary>Writes SARIF 2.1.0 for code scanning.</summary>
-    public static void WriteSarif(CheckRun run, string sarifPath) => WriteSarif(run.Catalog, run.AllFindings.ToList(), sarifPath);
+    public static void WriteSarif(CheckRun run, string sarifPath) =>
+        WriteSarif(run.Catalog, [.. run.AllFindings.Select(f => run.IsAccepted(f) ? Acceptance.AsSuppressed(f, run.Acceptance!.File) : f)], sarifPath);
 
     /// <summary>Writes SARIF 2.1.0 for findings read back from JSON (merged shards): the built-in rules describe them.</summary>
     public static void WriteSarif(IReadOnlyList<Finding> findings, string sarifPath) => WriteSarif(RuleCatalog.BuiltIn, findings, sarifPath);

@@ -2,6 +2,7 @@ using System.Text;
 using System.Text.Encodings.Web;
 using System.Text.Json;
 using System.Text.Json.Nodes;
+using SpecLint.Rules.Accepting;
 using SpecLint.Rules.Engine;
 
 namespace SpecLint.Reporting.Json;
@@ -113,7 +114,8 @@ internal static class JsonMerge
     {
         var root = JsonNode.Parse(json)!.AsObject();
         var findings = root["specs"]!.AsArray().SelectMany(s => s?["findings"]?.AsArray() ?? []).Concat(root["problems"]!.AsArray());
-        return [.. findings.OfType<JsonObject>().Select(ToFinding)];
+        var acceptedFile = root["accepted"]?["file"]?.GetValue<string>() ?? "";
+        return [.. findings.OfType<JsonObject>().Select(f => f["accepted"]?.GetValue<bool>() == true ? Acceptance.AsSuppressed(ToFinding(f), acceptedFile) : ToFinding(f))];
     }
 
     private static Finding ToFinding(JsonObject f)

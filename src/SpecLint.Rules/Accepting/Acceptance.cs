@@ -18,6 +18,16 @@ internal sealed record Acceptance(string File, ImmutableArray<AcceptedEntry> Ent
     /// <summary>True when an entry covers <paramref name="finding"/>.</summary>
     public bool Covers(Finding finding) => Covered.Contains(finding);
 
+    /// <summary>
+    /// <paramref name="finding"/> as outputs that know only waivers show an accepted finding (SARIF suppressions):
+    /// waived, with the accepted-findings file as the reason.
+    /// </summary>
+    public static Finding AsSuppressed(Finding finding, string file)
+    {
+        ArgumentNullException.ThrowIfNull(finding);
+        return finding with { Waived = true, WaiverReason = $"accepted in {file}" };
+    }
+
     /// <summary>The entry that covers <paramref name="finding"/> of spec <paramref name="specName"/>, or null.</summary>
     public AcceptedEntry? EntryFor(string specName, Finding finding) =>
         Entries.FirstOrDefault(e => e.Key == FindingKey.Of(specName, finding));

@@ -38,6 +38,18 @@ public sealed class AcceptTests
             Assert.Equal(0, doc.RootElement.GetProperty("accepted").GetProperty("stale").GetArrayLength());
         }
 
+        // Code scanning gets them as suppressed results, the same from a merge of shard outputs.
+        Assert.Equal(0, cli.Run("check", "hw", "--nominal-only", "--accepted", "speclint-accepted.json", "--sarif", "run.sarif", "--format", "json").Exit);
+        using (var sarif = JsonDocument.Parse(File.ReadAllText(cli.Path_("run.sarif"))))
+        {
+            var result = sarif.RootElement.GetProperty("runs")[0].GetProperty("results").EnumerateArray().Single(r => r.GetProperty("ruleId").GetString() == "phase-margin");
+            Assert.Equal("accepted in speclint-accepted.json", result.GetProperty("suppressions")[0].GetProperty("justification").GetString());
+        }
+
+        cli.Write("whole.json", json.Out);
+        Assert.Equal(0, cli.Run("merge", "whole.json", "--sarif", "merged.sarif").Exit);
+        Assert.Equal(File.ReadAllText(cli.Path_("run.sarif")), File.ReadAllText(cli.Path_("merged.sarif")));
+
         // A new finding in another spec still fails.
         cli.Write("hw/e.tia.yaml", Flagged("ch-e"));
         Assert.Equal(1, cli.Run("check", "hw", "--nominal-only", "--accepted", "speclint-accepted.json").Exit);
