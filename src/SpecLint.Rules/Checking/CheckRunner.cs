@@ -4,6 +4,7 @@ using SpecLint.Core.Analysis.Tolerance;
 using SpecLint.Core.Config;
 using SpecLint.Core.Spec;
 using SpecLint.Core.Spec.Model;
+using SpecLint.Rules.BuiltIn;
 using SpecLint.Rules.Engine;
 
 namespace SpecLint.Rules.Checking;
@@ -104,14 +105,34 @@ internal static class CheckRunner
         catch (Exception e) when (AnalysisFailedException.IsNumericalFailure(e))
         {
             var at = spec.Locations.Locate("");
-            return new SpecOutcome(spec.File, spec, null, null, null,
-                [new Finding(RuleIds.AnalysisFailed, Severity.Error, spec.File, "", at.Line, at.Column, $"the analysis failed: {e.Message}; check the values for a typo in a prefix")]);
+            var failed = new Finding(RuleIds.AnalysisFailed, Severity.Error, spec.File, "", at.Line, at.Column, $"the analysis failed: {e.Message}; check the values for a typo in a prefix");
+            return new SpecOutcome(spec.File, spec, null, null, null, [failed, .. ImplausibleValues(spec, config, options.Catalog)]);
         }
 
         var all = WaiverApplication.Apply(spec, findings, options.Today, options.Catalog.KnownIds)
             .OrderBy(f => f.Line).ThenBy(f => f.Column).ThenBy(f => f.RuleId, StringComparer.Ordinal).ThenBy(f => f.Message, StringComparer.Ordinal)
             .ToImmutableArray();
         return new SpecOutcome(spec.File, spec, analysis.Circuit, analysis.Analysis, analysis.Tolerances, all);
+    }
+
+    // The plausibility check needs no analysis: when a value far off makes the analysis fail, it still names the
+    // value and the prefix that fits, which is most often the cause.
+    private static IEnumerable<Finding> ImplausibleValues(TiaSpec spec, RepoConfig config, RuleCatalog catalog)
+    {
+        var descriptor = ImplausibleValueRule.Info;
+        var ruleConfig = ConfigurationBinding.For(config, descriptor.Id);
+        if (!catalog.Rules.Any(r => r is ImplausibleValueRule) || ruleConfig.Off || !RuleRunner.AppliesTo(config, descriptor.Id, spec))
+        {
+            return [];
+        }
+
+        return ImplausibleValueRule.Problems(spec, key => RuleContext.OptionSi(descriptor, ruleConfig, key))
+            .Select(p =>
+            {
+                var where = spec.Locations.LocateKeyOrValue(p.Pointer);
+                return new Finding(descriptor.Id, ruleConfig.Severity ?? descriptor.DefaultSeverity, spec.File, p.Pointer, where.Line, where.Column, p.Message, p.Fix);
+            })
+            .ToList();
     }
 
     private static void CheckUniqueNames(List<SpecOutcome> outcomes, List<Finding> problems)

@@ -60,8 +60,11 @@ internal sealed class RuleRunner
     }
 
     // `rules: {id: {tags: [medical]}}` limits a rule to specs that carry one of the tags.
-    private bool AppliesTo(string ruleId, TiaSpec spec) =>
-        _config.ForRule(ruleId) is not { Tags.IsEmpty: false } settings
+    private bool AppliesTo(string ruleId, TiaSpec spec) => AppliesTo(_config, ruleId, spec);
+
+    /// <summary>Whether the configuration lets rule <paramref name="ruleId"/> run on <paramref name="spec"/> (its tags).</summary>
+    internal static bool AppliesTo(RepoConfig config, string ruleId, TiaSpec spec) =>
+        config.ForRule(ruleId) is not { Tags.IsEmpty: false } settings
         || settings.Tags.Any(t => spec.Tags.Contains(t, StringComparer.Ordinal));
 
     // A candidate may leave an unrelated error in place (a clipped output is not fixed by Cf), but must not

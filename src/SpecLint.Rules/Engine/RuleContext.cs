@@ -91,7 +91,7 @@ public sealed class RuleContext
         return new Finding(_descriptor.Id, severity ?? _descriptor.DefaultSeverity, Spec.File, pointer, at.Line, at.Column, message, fix);
     }
 
-    private static double OptionSi(RuleDescriptor descriptor, RuleConfiguration configuration, string key, Dimension? wanted = null)
+    internal static double OptionSi(RuleDescriptor descriptor, RuleConfiguration configuration, string key, Dimension? wanted = null)
     {
         var option = descriptor.Options.FirstOrDefault(o => o.Key == key)
             ?? throw new ArgumentException($"rule '{descriptor.Id}' declares no option '{key}'", nameof(key));
