@@ -101,8 +101,9 @@ public sealed class ImplausibleValueRule : IRule
             var head = $"{name} = {written} is {side} the plausible range for {figure.What} ({range}), so the analysis describes another circuit";
             if (PrefixReading(si, figure.Dimension, min, max) is { } meant)
             {
-                // The fix keeps the user's tolerance; a spread whose text cannot be carried over gets no fix.
-                FixSuggestion? fix = tolerance is null || !spec.Locations.Contains(pointer)
+                // The fix keeps the user's tolerance; a spread whose text cannot be carried over gets no fix. Every
+                // key checked is either required or, left out, zero, so the pointer names a key in the file.
+                FixSuggestion? fix = tolerance is null
                     ? null
                     : new FixSuggestion(pointer, tolerance.Length == 0 ? meant : $"{meant} {tolerance}");
                 yield return (pointer, $"{head}: a prefix typed wrong? did you mean {meant}?", fix);
