@@ -74,9 +74,9 @@ public sealed class ImplausibleValueRuleTests
     [InlineData("rsh", "[|2 mΩ|]", "/input/shunt-resistance", "2 MΩ")]
     [InlineData("gbw", "[|10 mHz|]", "/amplifier/gbw", "10 MHz")]
     [InlineData("imax", "[|1 A|]", "/input/current/max", "1 mA")]
-    [InlineData("en", "[|5 mV/√Hz|]", "/amplifier/voltage-noise", "5 nV/√Hz")]
-    [InlineData("inoise", "[|2 µA/√Hz|]", "/amplifier/current-noise", "2 pA/√Hz")]
-    [InlineData("bias", "[|1 µA .. 2 A|]", "/amplifier/bias-current", "2 mA")]
+    [InlineData("en", "[|500 µV/√Hz|]", "/amplifier/voltage-noise", "500 nV/√Hz")]
+    [InlineData("inoise", "[|2 nA/√Hz|]", "/amplifier/current-noise", "2 pA/√Hz")]
+    [InlineData("bias", "[|1 µA .. 500 mA|]", "/amplifier/bias-current", "500 µA")]
     [InlineData("positive", "[|15 mV|]", "/conditions/supply/positive", "15 V")]
     [InlineData("negative", "[|-15 kV|]", "/conditions/supply/negative", "-15 V")]
     public void Flags_each_figure_outside_its_range_at_its_key(string figure, string value, string pointer, string meant)

@@ -31,7 +31,7 @@ internal static class CheckRunner
         var paths = options.Paths.Count > 0
             ? options.Paths
             : [rootConfig.Path is { } p ? Path.GetRelativePath(Directory.GetCurrentDirectory(), Path.GetDirectoryName(Path.GetFullPath(p))!) : "."];
-        var files = SpecFileFinder.Find(paths, rootConfig.Include, out var missing);
+        var files = SpecFileFinder.Find(paths, rootConfig.Include, rootConfig.Exclude, rootConfig.Folder, out var missing);
         if (options.HouseRules is not null)
         {
             // A house rule's cases carry deliberate mistakes; 'test-rules' runs them, a check of the tree does not
@@ -80,7 +80,7 @@ internal static class CheckRunner
             var bad = loaded.Diagnostics
                 .Select(d => new Finding(RuleIds.SpecInvalid, Severity.Error, d.File, d.Pointer, d.Line, d.Column, (d.KeyPath.Length > 0 ? d.KeyPath + ": " : "") + d.Message))
                 .ToImmutableArray();
-            return new SpecOutcome(file, null, null, null, null, bad);
+            return new SpecOutcome(file, null, null, null, null, bad) { IsUnreadable = loaded.Unreadable };
         }
 
         return CheckSpec(spec, config, options, tolerances);
