@@ -39,10 +39,13 @@ public sealed class PhaseMarginBelowFloorRule : IRule
             yield break;
         }
 
-        var fix = CfForFloor.Find(context, floor);
-        var fixText = fix is null
-            ? " No standard Cf restores it: reduce the input capacitance or Rf, or use an op-amp with more GBW."
-            : $" Use Cf = {fix.Value} (re-checked{(context.Tolerances is null ? "" : " at every corner")}).";
+        var search = CfForFloor.Search(context, floor);
+        var fix = search.Value is { } v ? new FixSuggestion("/feedback/capacitance", SpecEdits.CfText(context.Spec, new Capacitance(v))) : null;
+        var fixText = fix is not null
+            ? $" Use Cf = {fix.Value} (re-checked{(context.Tolerances is null ? "" : " at every corner")})."
+            : search.Closest is { } closest && search.RejectedBy != Info.Id
+                ? $" Cf = {SpecEdits.CfText(context.Spec, new Capacitance(closest))} would restore it, but {search.RejectedBy} rejects it ({search.Requirement}): reduce the input capacitance or Rf, or use an op-amp with more GBW."
+                : " No standard Cf restores it: reduce the input capacitance or Rf, or use an op-amp with more GBW.";
         if (pm.Degrees < floor.Degrees)
         {
             yield return context.Report(at, string.Create(CultureInfo.InvariantCulture,
