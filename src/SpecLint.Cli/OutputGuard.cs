@@ -5,7 +5,17 @@ internal static class OutputGuard
 {
     public static bool IsSafeTarget(string path, IEnumerable<string> inputs, string suggestedExtension, out string why)
     {
-        var full = Path.GetFullPath(path);
+        string full;
+        try
+        {
+            full = SpecLint.Core.Files.AtomicFile.OutputPath(path);
+        }
+        catch (SpecLint.Core.Files.OutputException e)
+        {
+            why = e.Message;
+            return false;
+        }
+
         var ext = Path.GetExtension(full).ToLowerInvariant();
         if (ext is ".yaml" or ".yml")
         {
@@ -13,7 +23,7 @@ internal static class OutputGuard
             return false;
         }
 
-        if (inputs.Any(i => string.Equals(Path.GetFullPath(i), full, StringComparison.Ordinal)))
+        if (inputs.Any(i => i.Length > 0 && string.Equals(Path.GetFullPath(i), full, StringComparison.Ordinal)))
         {
             why = $"'{path}' is one of the inputs";
             return false;

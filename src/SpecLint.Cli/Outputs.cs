@@ -1,4 +1,5 @@
-using System.Text;
+using SpecLint.Core.Files;
+using SpecLint.Core.Text;
 using SpecLint.Reporting.Annotations;
 using SpecLint.Reporting.Html;
 using SpecLint.Reporting.Json;
@@ -19,13 +20,53 @@ namespace SpecLint.Cli;
 /// <param name="Title">The report title.</param>
 internal sealed record OutputRequest(string Format, string? ReportPath = null, string? HtmlPath = null, string? SarifPath = null, string Title = "SpecLint report");
 
-/// <summary>Writes a run's outputs: the chosen terminal format and the files asked for.</summary>
+/// <summary>
+/// Writes a run's outputs. Files come first, each written atomically (see <see cref="AtomicFile"/>), so a
+/// failure to write is reported before the terminal summary and its "Result" line, and turns the exit code
+/// into 2; nothing already on disk is ever left half-written.
+/// </summary>
 internal static class Outputs
 {
-    private static readonly UTF8Encoding Utf8 = new(false);
+    /// <summary>Above this many analysed specs the HTML page links its charts from a folder beside it instead of inlining them.</summary>
+    public const int InlineChartLimit = 100;
 
-    public static void Write(CheckRun run, OutputRequest request, TextWriter output)
+    /// <summary>Writes everything asked for; returns the run's exit code, or 2 when an output could not be written.</summary>
+    public static int Write(CheckRun run, OutputRequest request, TextWriter output, TextWriter error)
     {
+        var failed = false;
+        void Try(string option, Action write)
+        {
+            try
+            {
+                write();
+            }
+            catch (OutputException e)
+            {
+                error.WriteLine($"speclint: {option}: {TextSafety.ForTerminal(e.Message)}; nothing was replaced there");
+                failed = true;
+            }
+        }
+
+        if (request.ReportPath is not null)
+        {
+            Try("--report", () => WriteMarkdown(run, request.ReportPath, request.Title));
+        }
+
+        if (request.HtmlPath is not null)
+        {
+            Try("--html", () => WriteHtml(run, request.HtmlPath, request.Title));
+        }
+
+        if (request.SarifPath is not null)
+        {
+            Try("--sarif", () => WriteSarif(run, request.SarifPath));
+        }
+
+        if (request.Format == "github")
+        {
+            Try("GITHUB_STEP_SUMMARY", () => AppendJobSummary(run, request.Title));
+        }
+
         switch (request.Format)
         {
             case "json":
@@ -33,71 +74,86 @@ internal static class Outputs
                 break;
             case "github":
                 GitHubAnnotations.Write(output, run.AllFindings.ToList(), Directory.GetCurrentDirectory());
-                output.WriteLine(TerminalReport.Summary(run));
-                JobSummary.FromEnvironment()?.Append(MarkdownReport.Render(run, Directory.GetCurrentDirectory(), new MarkdownReport.Options(request.Title)));
+                output.WriteLine(TerminalReport.Summary(run, outputFailed: failed));
                 break;
             default:
-                TerminalReport.Write(run, output, UseColor(output));
+                TerminalReport.Write(run, output, UseColor(output), outputFailed: failed);
                 break;
         }
 
-        if (request.ReportPath is not null)
-        {
-            WriteMarkdown(run, request.ReportPath, request.Title);
-        }
-
-        if (request.HtmlPath is not null)
-        {
-            WriteHtml(run, request.HtmlPath, request.Title);
-        }
-
-        if (request.SarifPath is not null)
-        {
-            WriteSarif(run, request.SarifPath);
-        }
+        return failed ? ExitCodes.UnusableInput : run.ExitCode;
     }
 
-    /// <summary>Writes the Markdown report and its plots (in a "plots" folder beside it).</summary>
+    /// <summary>Writes the Markdown report and its plots (in a "&lt;name&gt;-plots" folder beside it).</summary>
     public static void WriteMarkdown(CheckRun run, string reportPath, string title)
     {
-        var full = Path.GetFullPath(reportPath);
+        var full = AtomicFile.OutputPath(reportPath);
         var dir = Path.GetDirectoryName(full)!;
-        Directory.CreateDirectory(dir);
+        AtomicFile.CreateFolder(reportPath, dir);
         var plotFolder = Path.GetFileNameWithoutExtension(full) + "-plots";
         var plots = PlotFiles.Write(run, dir, plotFolder);
         var md = MarkdownReport.Render(run, dir, new MarkdownReport.Options(title, Extras: plots));
-        File.WriteAllText(full, md, Utf8);
+        AtomicFile.WriteAllText(full, md);
     }
 
-    /// <summary>Writes one standalone HTML page with the plots inline.</summary>
+    /// <summary>
+    /// Writes one HTML page. Up to <see cref="InlineChartLimit"/> specs it is standalone with the charts inline;
+    /// above that the charts go to a "&lt;name&gt;-plots" folder beside it and are linked, so the page stays a
+    /// size a browser opens (three charts per spec for thousands of specs would be hundreds of megabytes).
+    /// </summary>
     public static void WriteHtml(CheckRun run, string htmlPath, string title)
     {
-        var full = Path.GetFullPath(htmlPath);
+        var full = AtomicFile.OutputPath(htmlPath);
         var dir = Path.GetDirectoryName(full)!;
-        Directory.CreateDirectory(dir);
-        var scratch = Directory.CreateTempSubdirectory("speclint-html-");
-        try
+        AtomicFile.CreateFolder(htmlPath, dir);
+        var analysed = run.Specs.Count(s => s.Analysis is not null);
+        if (analysed > InlineChartLimit)
         {
-            var plots = PlotFiles.Write(run, scratch.FullName, "plots");
-            var md = MarkdownReport.Render(run, dir, new MarkdownReport.Options(title, Extras: plots));
-            File.WriteAllText(full, HtmlReport.Render(md, scratch.FullName, title), Utf8);
+            var plotFolder = Path.GetFileNameWithoutExtension(full) + "-plots";
+            var linked = PlotFiles.Write(run, dir, plotFolder);
+            var linkedMd = MarkdownReport.Render(run, dir, new MarkdownReport.Options(title, Extras: linked));
+            AtomicFile.WriteAllText(full, HtmlReport.Render(linkedMd, _ => null, title));
+            return;
         }
-        finally
-        {
-            scratch.Delete(recursive: true);
-        }
+
+        var charts = new Dictionary<string, string>(StringComparer.Ordinal);
+        var plots = PlotFiles.Build(run, "plots", (file, svg) => charts["plots/" + file] = svg);
+        var md = MarkdownReport.Render(run, dir, new MarkdownReport.Options(title, Extras: plots));
+        AtomicFile.WriteAllText(full, HtmlReport.Render(md, src => charts.GetValueOrDefault(src), title));
     }
 
     /// <summary>Writes SARIF 2.1.0 for code scanning.</summary>
     public static void WriteSarif(CheckRun run, string sarifPath)
     {
-        var full = Path.GetFullPath(sarifPath);
-        Directory.CreateDirectory(Path.GetDirectoryName(full)!);
         var rules = run.Catalog.Rules;
         var pages = rules.Select(r => r.Descriptor.Id).Select(id => (id, page: run.Catalog.Page(id))).Where(x => x.page is not null).ToDictionary(x => x.id, x => x.page!);
         var houseRules = rules.Select(r => r.Descriptor.Id).Where(run.Catalog.IsHouseRule).ToDictionary(id => id, id => run.Catalog.HouseRuleSource(id)!);
         var options = new SarifOptions(MarkdownReport.ToolVersion) { RulePages = pages, RepositoryRoot = Directory.GetCurrentDirectory(), HouseRuleSources = houseRules };
-        File.WriteAllText(full, SarifWriter.Write(rules.Select(r => r.Descriptor), run.AllFindings.ToList(), options), Utf8);
+        AtomicFile.WriteAllText(sarifPath, SarifWriter.Write(rules.Select(r => r.Descriptor), run.AllFindings.ToList(), options));
+    }
+
+    /// <summary>Appends the report to the job summary file named by the environment, when there is one.</summary>
+    private static void AppendJobSummary(CheckRun run, string title)
+    {
+        if (JobSummary.FromEnvironment() is not { } summary)
+        {
+            return;
+        }
+
+        if (FileKinds.Of(summary.Path) is FileKind.Directory or FileKind.Special)
+        {
+            throw new OutputException(summary.Path, "the job summary must be a regular file");
+        }
+
+        var markdown = MarkdownReport.Render(run, Directory.GetCurrentDirectory(), new MarkdownReport.Options(title));
+        try
+        {
+            summary.Append(markdown);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
+        {
+            throw new OutputException(summary.Path, e.Message);
+        }
     }
 
     private static bool UseColor(TextWriter output) =>

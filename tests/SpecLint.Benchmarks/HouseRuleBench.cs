@@ -25,7 +25,7 @@ internal static class HouseRuleBench
             {
                 var folder = Path.Combine(repo, "house-rules", id);
                 Directory.CreateDirectory(folder);
-                File.WriteAllText(Path.Combine(folder, "LimitRule.cs"), LimitRule(id, limit));
+                File.WriteAllText(Path.Combine(folder, Pascal(id) + "Rule.cs"), LimitRule(id, limit));
             }
 
             var tool = Path.Combine(AppContext.BaseDirectory, "speclint.dll");
@@ -52,7 +52,7 @@ internal static class HouseRuleBench
 
     private static double Time(string tool, string repo, string cache, string extra = "")
     {
-        var start = new ProcessStartInfo("dotnet", $"\"{tool}\" check . --nominal-only --quiet {extra}")
+        var start = new ProcessStartInfo("dotnet", $"\"{tool}\" check scatter.tia.yaml --nominal-only --quiet {extra}")
         {
             WorkingDirectory = repo,
             RedirectStandardOutput = true,
@@ -61,13 +61,13 @@ internal static class HouseRuleBench
         start.Environment["SPECLINT_CACHE"] = cache;
         var clock = Stopwatch.StartNew();
         using var process = Process.Start(start)!;
-        process.StandardOutput.ReadToEnd();
+        var output = process.StandardOutput.ReadToEnd();
         var error = process.StandardError.ReadToEnd();
         process.WaitForExit();
         clock.Stop();
         if (process.ExitCode > 1)
         {
-            throw new InvalidOperationException($"speclint exited {process.ExitCode}: {error}");
+            throw new InvalidOperationException($"speclint exited {process.ExitCode}: {output}{error}");
         }
 
         return clock.Elapsed.TotalMilliseconds;
@@ -79,10 +79,12 @@ internal static class HouseRuleBench
         return values[values.Length / 2];
     }
 
+    private static string Pascal(string id) => string.Concat(id.Split('-').Select(p => char.ToUpperInvariant(p[0]) + p[1..]));
+
     private static string LimitRule(string id, string limit) => $$"""
         namespace Bench;
 
-        public sealed class LimitRule : IRule
+        public sealed class {{Pascal(id)}}Rule : IRule
         {
             public static readonly RuleOption Max = new("max", Dimension.{{(id.StartsWith("rf", StringComparison.Ordinal) ? "Resistance" : "Capacitance")}}, "{{limit}}", "limit");
 

@@ -22,6 +22,14 @@ internal sealed class CliHarness : IDisposable
         return path;
     }
 
+    public string WriteBytes(string relativePath, byte[] bytes)
+    {
+        var path = Path.Combine(Root, relativePath);
+        Directory.CreateDirectory(Path.GetDirectoryName(path)!);
+        File.WriteAllBytes(path, bytes);
+        return path;
+    }
+
     public string Path_(string relative) => Path.Combine(Root, relative);
 
     /// <summary>Runs with the scratch folder as the working directory (tests in this assembly run one at a time for that).</summary>

@@ -80,6 +80,26 @@ public sealed class HouseRuleCommandTests
     }
 
     [Fact]
+    public void Sarif_describes_a_house_rule_with_its_page_and_no_link_to_speclints_pages()
+    {
+        using var cli = new CliHarness();
+        Directory.CreateDirectory(cli.Path_(".git"));
+        cli.Run("new-rule", "rf-limit");
+        cli.Write("hw/big-rf.tia.yaml", Specs.Clean.Replace("resistance: 1 MΩ ±1%", "resistance: 220 MΩ ±1%", StringComparison.Ordinal)
+            .Replace("current: { min: 80 nA, max: 3 µA }", "current: { min: 80 pA, max: 3 nA }", StringComparison.Ordinal));
+
+        cli.Run("check", "hw", "--nominal-only", "--sarif", "out/speclint.sarif");
+
+        using var sarif = System.Text.Json.JsonDocument.Parse(File.ReadAllText(cli.Path_("out/speclint.sarif")));
+        var run = sarif.RootElement.GetProperty("runs")[0];
+        var rule = run.GetProperty("tool").GetProperty("driver").GetProperty("rules").EnumerateArray().Single(r => r.GetProperty("id").GetString() == "rf-limit");
+        Assert.False(rule.TryGetProperty("helpUri", out _));
+        Assert.StartsWith("# rf-limit:", rule.GetProperty("help").GetProperty("markdown").GetString(), StringComparison.Ordinal);
+        Assert.Equal("house-rule", rule.GetProperty("properties").GetProperty("tags")[0].GetString());
+        Assert.Contains(run.GetProperty("results").EnumerateArray(), r => r.GetProperty("ruleId").GetString() == "rf-limit");
+    }
+
+    [Fact]
     public void The_example_teams_house_rules_pass_their_cases()
     {
         using var cli = new CliHarness();

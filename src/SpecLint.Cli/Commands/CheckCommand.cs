@@ -77,8 +77,7 @@ internal static class CheckCommand
                 HouseRules = parse.GetValue(noHouseRules) ? null : HouseRuleSources.Create(),
             };
             var run = CheckRunner.Run(options);
-            Outputs.Write(run, request, output);
-            return run.ExitCode;
+            return Outputs.Write(run, request, output, error);
         });
         return command;
     }

@@ -1,6 +1,8 @@
 using System.CommandLine;
 using System.Reflection;
 using System.Text;
+using SpecLint.Core.Files;
+using SpecLint.Core.Text;
 using SpecLint.Reporting.Terminal;
 using SpecLint.Rules.Checking;
 using SpecLint.Rules.Engine;
@@ -30,28 +32,44 @@ internal static class DemoCommand
                 return ExitCodes.UnusableInput;
             }
 
+            if (FileKinds.Of(folder) is FileKind.Regular or FileKind.Special)
+            {
+                error.WriteLine($"speclint: '{TextSafety.ForTerminal(folder)}' exists and is a file, not a folder; nothing was written. Choose another folder with --out.");
+                return ExitCodes.UnusableInput;
+            }
+
             var specs = Path.Combine(folder, "specs");
-            Directory.CreateDirectory(specs);
-            File.WriteAllText(Path.Combine(folder, Marker), "made by 'speclint demo'; safe to delete\n", new UTF8Encoding(false));
-            foreach (var (name, text) in DemoSpecs())
-            {
-                File.WriteAllText(Path.Combine(specs, name), text, new UTF8Encoding(false));
-            }
-
-            var ruleFolder = Path.Combine(folder, "house-rules", DemoHouseRuleId);
-            Directory.CreateDirectory(ruleFolder);
-            foreach (var (name, text) in Resources("SpecLint.Cli.DemoHouseRule."))
-            {
-                File.WriteAllText(Path.Combine(ruleFolder, name), text, new UTF8Encoding(false));
-            }
-
-            File.WriteAllText(Path.Combine(folder, ".speclint.yaml"), DemoConfig, new UTF8Encoding(false));
-            var run = CheckRunner.Run(new CheckOptions { Paths = [specs], HouseRules = HouseRuleSources.Create() });
-            TerminalReport.Write(run, output, color: false);
             var report = Path.Combine(folder, "report.md");
             const string title = "SpecLint demo: the Saltmarsh Tern buoy's front ends";
-            Outputs.WriteMarkdown(run, report, title);
-            Outputs.WriteHtml(run, Path.Combine(folder, "report.html"), title);
+            CheckRun run;
+            try
+            {
+                AtomicFile.CreateFolder(folder, specs);
+                AtomicFile.WriteAllText(Path.Combine(folder, Marker), "made by 'speclint demo'; safe to delete\n");
+                foreach (var (name, text) in DemoSpecs())
+                {
+                    AtomicFile.WriteAllText(Path.Combine(specs, name), text);
+                }
+
+                var ruleFolder = Path.Combine(folder, "house-rules", DemoHouseRuleId);
+                AtomicFile.CreateFolder(folder, ruleFolder);
+                foreach (var (name, text) in Resources("SpecLint.Cli.DemoHouseRule."))
+                {
+                    AtomicFile.WriteAllText(Path.Combine(ruleFolder, name), text);
+                }
+
+                AtomicFile.WriteAllText(Path.Combine(folder, ".speclint.yaml"), DemoConfig);
+                run = CheckRunner.Run(new CheckOptions { Paths = [specs], HouseRules = HouseRuleSources.Create() });
+                Outputs.WriteMarkdown(run, report, title);
+                Outputs.WriteHtml(run, Path.Combine(folder, "report.html"), title);
+            }
+            catch (OutputException e)
+            {
+                error.WriteLine($"speclint: demo: {TextSafety.ForTerminal(e.Message)}");
+                return ExitCodes.UnusableInput;
+            }
+
+            TerminalReport.Write(run, output, color: false);
             output.WriteLine();
             output.WriteLine($"Demo report: {report} (plots in {Path.Combine(folder, "report-plots")}; one-page HTML: {Path.Combine(folder, "report.html")})");
             output.WriteLine("These channels are invented examples; some are clean and some carry deliberate design mistakes.");

@@ -1,8 +1,8 @@
 using System.CommandLine;
-using System.Text;
 using System.Text.RegularExpressions;
 using SpecLint.Cli.Scaffold;
 using SpecLint.Core.Config;
+using SpecLint.Core.Files;
 using SpecLint.Rules.Engine;
 
 namespace SpecLint.Cli.Commands;
@@ -51,16 +51,15 @@ internal static partial class NewRuleCommand
             try
             {
                 Directory.CreateDirectory(Path.Combine(ruleFolder, "cases"));
-                var utf8 = new UTF8Encoding(false);
                 var classFile = Path.Combine(ruleFolder, RuleScaffold.PascalName(wanted) + "Rule.cs");
-                File.WriteAllText(classFile, RuleScaffold.ClassFile(wanted), utf8);
-                File.WriteAllText(Path.Combine(ruleFolder, wanted + ".md"), RuleScaffold.Page(wanted), utf8);
-                File.WriteAllText(Path.Combine(ruleFolder, "cases", "flagged.tia.yaml"), RuleScaffold.Case(wanted, flagged: true), utf8);
-                File.WriteAllText(Path.Combine(ruleFolder, "cases", "clean.tia.yaml"), RuleScaffold.Case(wanted, flagged: false), utf8);
+                AtomicFile.WriteAllText(classFile, RuleScaffold.ClassFile(wanted));
+                AtomicFile.WriteAllText(Path.Combine(ruleFolder, wanted + ".md"), RuleScaffold.Page(wanted));
+                AtomicFile.WriteAllText(Path.Combine(ruleFolder, "cases", "flagged.tia.yaml"), RuleScaffold.Case(wanted, flagged: true));
+                AtomicFile.WriteAllText(Path.Combine(ruleFolder, "cases", "clean.tia.yaml"), RuleScaffold.Case(wanted, flagged: false));
                 if (configPath is null)
                 {
                     var config = Path.Combine(root, RepoConfig.FileName);
-                    File.WriteAllText(config, $"# Repository configuration for SpecLint.\nhouse-rules: [{Path.GetRelativePath(root, target).Replace('\\', '/')}/]\n", utf8);
+                    AtomicFile.WriteAllText(config, $"# Repository configuration for SpecLint.\nhouse-rules: [{Path.GetRelativePath(root, target).Replace('\\', '/')}/]\n");
                     output.WriteLine($"wrote {Shown(config)} (house rules are found from it)");
                 }
 
@@ -68,7 +67,7 @@ internal static partial class NewRuleCommand
                 output.WriteLine($"Next: edit the class and the page, then run 'speclint test-rules'.");
                 return ExitCodes.Clean;
             }
-            catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+            catch (Exception e) when (e is IOException or UnauthorizedAccessException or OutputException)
             {
                 error.WriteLine($"speclint: new-rule: cannot write {Shown(ruleFolder)}: {e.Message}");
                 return ExitCodes.UnusableInput;

@@ -10,6 +10,7 @@ namespace SpecLint.Core.Analysis;
 internal static class NoiseIntegrator
 {
     private const int Order = 8;
+    private const int MaxPanels = 100_000;
 
     // Nodes and weights on [-1, 1], from MathNet once; per panel they are only shifted and scaled.
     private static readonly double[] Nodes;
@@ -84,7 +85,8 @@ internal static class NoiseIntegrator
             return;
         }
 
-        var panels = Math.Max(1, (int)Math.Ceiling((b - a) / maxWidth));
+        // Capped so that no band can ask for an unbounded number of panels (the spec limits keep it far below).
+        var panels = (int)Math.Clamp(Math.Ceiling((b - a) / maxWidth), 1, MaxPanels);
         var h = (b - a) / panels;
         var half = h / 2;
 

@@ -21,6 +21,7 @@ public static class TiaAnalyzer
     private const double RootAccuracy = 1e-12;
     private const int RootIterations = 200;
     private const double ScanMargin = 1e3;
+    private const int MaxScanPoints = 100_000;
 
     // Width in ln ω below which the crossing search stops splitting: crossings closer than this are one tangency.
     private const double CrossingResolution = 1e-9;
@@ -287,8 +288,10 @@ public static class TiaAnalyzer
         var (wLo, wHi) = model.CharacteristicRange();
         var uLo = Math.Log(wLo / ScanMargin);
         var uHi = Math.Log(wHi * ScanMargin);
-        var du = Math.Log(10) / pointsPerDecade;
-        var n = (int)Math.Ceiling((uHi - uLo) / du);
+        // The span is bounded by the spec limits, but the point count is capped all the same so no input can
+        // make the scan run for ever: past the cap the points spread out rather than multiply.
+        var du = Math.Max(Math.Log(10) / pointsPerDecade, (uHi - uLo) / MaxScanPoints);
+        var n = double.IsFinite(du) && du > 0 ? (int)Math.Min(Math.Ceiling((uHi - uLo) / du), MaxScanPoints) : 0;
 
         var logTarget = Math.Log(zt0 * zt0 / 2);
         var logZt0Sq = Math.Log(zt0 * zt0);

@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using System.Globalization;
 using System.Text.Json;
 using System.Text.Json.Nodes;
+using SpecLint.Core.Files;
 using SpecLint.Core.Spec;
 using SpecLint.Core.Spec.Schema;
 using SpecLint.Core.Spec.Yaml;
@@ -49,12 +50,14 @@ internal static class RepoConfigLoader
         try
         {
             var info = new FileInfo(path);
-            if (info.Exists && info.Length > YamlTreeReader.MaxFileBytes)
+            if (FileKinds.Of(path) == FileKind.Regular && info.Length > YamlTreeReader.MaxFileBytes)
             {
                 return Invalid(shown, YamlTreeReader.TooLargeMessage(info.Length));
             }
 
-            return Load(YamlTreeReader.Read(File.ReadAllBytes(path)), shown, path);
+            return BoundedFileReader.TryRead(path, YamlTreeReader.MaxFileBytes, out var bytes, out var why)
+                ? Load(YamlTreeReader.Read(bytes), shown, path)
+                : Invalid(shown, why);
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException or NotSupportedException or ArgumentException)
         {
@@ -94,7 +97,9 @@ internal static class RepoConfigLoader
         var obj = root as JsonObject ?? [];
         var d = RepoConfig.Default;
 
+        // Only when every entry is text: a number among the globs was reported by the schema at its position.
         var include = Ok("/include", sink) && obj["include"] is JsonArray inc
+            && inc.All(n => n is JsonValue v && v.GetValueKind() == JsonValueKind.String)
             ? [.. inc.Select(n => n!.GetValue<string>())]
             : d.Include;
         var failOn = Ok("/fail-on", sink) && obj["fail-on"] is JsonValue f ? ParseSeverity(f.GetValue<string>()) : d.FailOn;

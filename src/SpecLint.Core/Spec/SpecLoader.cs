@@ -1,3 +1,4 @@
+using SpecLint.Core.Files;
 using SpecLint.Core.Spec.Schema;
 using SpecLint.Core.Spec.Yaml;
 using SpecLint.Core.Units;
@@ -20,13 +21,16 @@ internal static class SpecLoader
         try
         {
             var info = new FileInfo(path);
-            if (info.Exists && info.Length > YamlTreeReader.MaxFileBytes)
+            if (FileKinds.Of(path) == FileKind.Regular && info.Length > YamlTreeReader.MaxFileBytes)
             {
                 // Checked before reading so a huge file is never pulled into memory.
                 return new SpecLoadResult(null, [new SpecDiagnostic(shown, 1, 1, SpecDiagnostic.SpecInvalid, "", YamlTreeReader.TooLargeMessage(info.Length))]);
             }
 
-            bytes = File.ReadAllBytes(path);
+            if (!BoundedFileReader.TryRead(path, YamlTreeReader.MaxFileBytes, out bytes, out var why))
+            {
+                return new SpecLoadResult(null, [new SpecDiagnostic(shown, 1, 1, SpecDiagnostic.SpecInvalid, "", why)]);
+            }
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException or NotSupportedException or ArgumentException)
         {

@@ -185,14 +185,14 @@ internal sealed partial class SpecModelReader(YamlTree tree, DiagnosticSink sink
         where T : struct, IQuantity<T>
     {
         var parsed = Parse(pointer, T.Dimension, single: false);
-        if (parsed is null)
+        if (parsed is null || !Finite(pointer, parsed))
         {
             return null;
         }
 
         var before = sink.Count;
         check?.Invoke(pointer, parsed);
-        return sink.Count == before ? Spread<T>.From(parsed) : null;
+        return sink.Count == before && WithinLimits(pointer, parsed) ? Spread<T>.From(parsed) : null;
     }
 
     /// <summary>Parses a key that takes exactly one value.</summary>
@@ -200,14 +200,14 @@ internal sealed partial class SpecModelReader(YamlTree tree, DiagnosticSink sink
         where T : struct, IQuantity<T>
     {
         var parsed = Parse(pointer, T.Dimension, single: true);
-        if (parsed is null)
+        if (parsed is null || !Finite(pointer, parsed))
         {
             return null;
         }
 
         var before = sink.Count;
         check?.Invoke(pointer, parsed);
-        return sink.Count == before ? T.FromSi(parsed.Typ) : null;
+        return sink.Count == before && WithinLimits(pointer, parsed) ? T.FromSi(parsed.Typ) : null;
     }
 
     /// <summary>A gain where a bare number would be ambiguous (dB or V/V?), so the unit is required.</summary>
@@ -267,6 +267,13 @@ internal sealed partial class SpecModelReader(YamlTree tree, DiagnosticSink sink
             return null;
         }
 
+        var finite = Finite(JsonPointerText.Append(pointer, "min"), min) & Finite(JsonPointerText.Append(pointer, "max"), max)
+            & (typ is null || Finite(JsonPointerText.Append(pointer, "typ"), typ));
+        if (!finite)
+        {
+            return null;
+        }
+
         if (min.Typ > max.Typ)
         {
             sink.AtValue(JsonPointerText.Append(pointer, "min"), $"min ({Format(min.Typ, dimension)}) is above max ({Format(max.Typ, dimension)}); write the low limit as min");
@@ -308,7 +315,7 @@ internal sealed partial class SpecModelReader(YamlTree tree, DiagnosticSink sink
     {
         const string pointer = "/requirements/noise/band";
         var band = Parse(pointer, Dimension.Frequency, single: false);
-        if (band is null)
+        if (band is null || !Finite(pointer, band))
         {
             return (null, null);
         }
@@ -322,6 +329,11 @@ internal sealed partial class SpecModelReader(YamlTree tree, DiagnosticSink sink
         if (band.Min < 0 || band.Max <= band.Min)
         {
             sink.AtValue(pointer, "the noise band must run from a frequency of 0 Hz or more up to a higher one; write e.g. \"1 Hz .. 100 kHz\"");
+            return (null, null);
+        }
+
+        if (!WithinLimits(pointer, band))
+        {
             return (null, null);
         }
 
@@ -416,6 +428,39 @@ internal sealed partial class SpecModelReader(YamlTree tree, DiagnosticSink sink
             sink.AtValue(pointer, $"the tolerance takes {what} below zero ({Format(q.Min, Dimension.Capacitance)}); check the tolerance, e.g. \"12 pF ±20%\"");
         }
     }
+
+    /// <summary>
+    /// An overflowing value (7000 dB, or a tolerance of ±1e308 %) is refused before the key's own checks run,
+    /// so no message ever shows an infinity.
+    /// </summary>
+    private bool Finite(string pointer, ParsedQuantity q)
+    {
+        if (double.IsFinite(q.Typ) && double.IsFinite(q.Min) && double.IsFinite(q.Max))
+        {
+            return true;
+        }
+
+        var limits = PhysicalLimits.For(pointer);
+        sink.AtValue(pointer, $"{Written(pointer)} is too large a number to be {UnitTable.Describe(q.Dimension)}"
+            + (limits is null ? "" : $"; it must lie within {limits.Text}") + "; check the exponent and the tolerance");
+        return false;
+    }
+
+    /// <summary>The hard limits of <see cref="PhysicalLimits"/>, checked after the key's own plausibility checks (which say more).</summary>
+    private bool WithinLimits(string pointer, ParsedQuantity q)
+    {
+        if (PhysicalLimits.For(pointer) is not { } limits || (limits.Allows(q.Typ) && limits.Allows(q.Min) && limits.Allows(q.Max)))
+        {
+            return true;
+        }
+
+        var what = q.Form is ToleranceForm.None ? "" : " (with its tolerance or range)";
+        sink.AtValue(pointer, $"{Written(pointer)}{what} is outside what a real part or figure can be here: it must lie within {limits.Text}; check the prefix and the exponent");
+        return false;
+    }
+
+    private string Written(string pointer) =>
+        tree.ScalarText.TryGetValue(pointer, out var text) ? $"\"{text.Trim()}\"" : "the value";
 
     private static string Format(double si, Dimension dimension) => QuantityFormat.FormatRounded(si, dimension);
 

@@ -8,13 +8,17 @@ namespace SpecLint.Core.Units;
 /// </summary>
 public static class QuantityFormat
 {
+    private const int MaxPlainPower = 5;
+    private const int MinPlainPower = -6;
+
     /// <summary>Formats an SI value in the display unit of its dimension, e.g. 2.2e-12 F as "2.2 pF".</summary>
     public static string Format(double si, Dimension dimension)
     {
         var unit = UnitTable.DisplayUnit(dimension);
-        if (double.IsNaN(si) || double.IsInfinity(si))
+        if (!double.IsFinite(si))
         {
-            return si.ToString(CultureInfo.InvariantCulture) + " " + unit.Symbol;
+            // Spec limits keep every figure finite; should one slip through, it must not print as "NaN" or "Infinity".
+            return "undefined";
         }
 
         if (unit.ToSi is not null)
@@ -50,9 +54,10 @@ public static class QuantityFormat
     public static string FormatRounded(double si, Dimension dimension, int significantDigits = 3)
     {
         var unit = UnitTable.DisplayUnit(dimension);
-        if (double.IsNaN(si) || double.IsInfinity(si))
+        if (!double.IsFinite(si))
         {
-            return si.ToString(CultureInfo.InvariantCulture) + " " + unit.Symbol;
+            // Spec limits keep every figure finite; should one slip through, it must not print as "NaN" or "Infinity".
+            return "undefined";
         }
 
         var g = "G" + significantDigits.ToString(CultureInfo.InvariantCulture);
@@ -60,7 +65,7 @@ public static class QuantityFormat
         {
             var shown = unit.FromSi!(si);
             // Temperatures and angles read best to one decimal, whatever their magnitude.
-            var text = Math.Abs(shown) >= 100 ? shown.ToString("0.#", CultureInfo.InvariantCulture) : shown.ToString(g, CultureInfo.InvariantCulture);
+            var text = Math.Abs(shown) is >= 100 and < 1e6 ? shown.ToString("0.#", CultureInfo.InvariantCulture) : shown.ToString(g, CultureInfo.InvariantCulture);
             return text + " " + unit.Symbol;
         }
 
@@ -132,9 +137,19 @@ public static class QuantityFormat
         return (digits, exponent, value < 0);
     }
 
-    /// <summary>Writes digits d1d2d3… where d1 has the power of ten <paramref name="leadingPower"/>.</summary>
+    /// <summary>
+    /// Writes digits d1d2d3… where d1 has the power of ten <paramref name="leadingPower"/>. Past the prefixes
+    /// (above 999 T or below 0.001 f) it switches to an exponent, so no value is ever written as a string of
+    /// hundreds of zeros; the text still parses back to the same double.
+    /// </summary>
     private static string PlaceDecimalPoint(string digits, int leadingPower)
     {
+        if (leadingPower > MaxPlainPower || leadingPower < MinPlainPower)
+        {
+            var mantissa = digits.Length == 1 ? digits : digits[..1] + "." + digits[1..];
+            return mantissa + "e" + leadingPower.ToString(CultureInfo.InvariantCulture);
+        }
+
         var intCount = leadingPower + 1;
         if (intCount <= 0)
         {

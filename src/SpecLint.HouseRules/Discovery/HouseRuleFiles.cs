@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using System.Text;
 using SpecLint.Core.Config;
+using SpecLint.Core.Files;
 using SpecLint.Core.Spec;
 using SpecLint.Rules.Checking;
 using SpecLint.Rules.Engine;
@@ -112,29 +113,22 @@ internal static class HouseRuleFiles
 
     private static string? Read(string full, string rel, Func<string, string> display, List<Finding> problems)
     {
+        // The same guarded read as spec files: regular files only, capped while reading.
+        if (!BoundedFileReader.TryRead(full, MaxFileBytes, out var bytes, out var error))
+        {
+            problems.Add(new Finding(RuleIds.HouseRuleInvalid, Severity.Error, display(full), "", 1, 1, $"cannot use {rel}: {error}"));
+            return null;
+        }
+
         try
         {
-            var info = new FileInfo(full);
-            if (info.Length > MaxFileBytes)
-            {
-                problems.Add(new Finding(RuleIds.HouseRuleInvalid, Severity.Error, display(full), "", 1, 1,
-                    $"{rel} is {info.Length} bytes, more than the {MaxFileBytes} a house-rule source may have"));
-                return null;
-            }
-
-            var bytes = File.ReadAllBytes(full);
             return new UTF8Encoding(false, throwOnInvalidBytes: true).GetString(bytes).TrimStart('\uFEFF');
         }
         catch (DecoderFallbackException)
         {
             problems.Add(new Finding(RuleIds.HouseRuleInvalid, Severity.Error, display(full), "", 1, 1, $"{rel} is not UTF-8 text, so it cannot be C# source"));
+            return null;
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        {
-            problems.Add(new Finding(RuleIds.HouseRuleInvalid, Severity.Error, display(full), "", 1, 1, $"cannot read {rel}: {e.Message}"));
-        }
-
-        return null;
     }
 
     // Regular files only, no symbolic links to folders (a link loop or a link out of the repository must not be walked).

@@ -11,25 +11,36 @@ namespace SpecLint.Reporting.Html;
 /// </summary>
 internal static partial class HtmlReport
 {
-    private static readonly MarkdownPipeline Pipeline = new MarkdownPipelineBuilder().UseAdvancedExtensions().Build();
+    // Raw HTML in the Markdown is shown as text: every user string reaches the page escaped, never as markup.
+    private static readonly MarkdownPipeline Pipeline = new MarkdownPipelineBuilder().UseAdvancedExtensions().DisableHtml().Build();
 
     [GeneratedRegex("<img src=\"(?<src>[^\"]+\\.svg)\" alt=\"(?<alt>[^\"]*)\"\\s*/?>", RegexOptions.CultureInvariant)]
     private static partial Regex SvgImage();
 
     /// <summary>Renders <paramref name="markdown"/>; SVG images are read from <paramref name="baseDirectory"/> and inlined.</summary>
-    public static string Render(string markdown, string baseDirectory, string title)
+    public static string Render(string markdown, string baseDirectory, string title) =>
+        Render(markdown, src =>
+        {
+            var path = Path.Combine(baseDirectory, src);
+            return File.Exists(path) ? File.ReadAllText(path, Encoding.UTF8) : null;
+        }, title);
+
+    /// <summary>
+    /// Renders <paramref name="markdown"/>; each SVG image is inlined with the text <paramref name="svgFor"/> gives for
+    /// its (decoded) relative path, or left as a link when it gives null.
+    /// </summary>
+    public static string Render(string markdown, Func<string, string?> svgFor, string title)
     {
         ArgumentNullException.ThrowIfNull(markdown);
+        ArgumentNullException.ThrowIfNull(svgFor);
         var body = Markdig.Markdown.ToHtml(markdown, Pipeline);
         body = SvgImage().Replace(body, m =>
         {
-            var path = Path.Combine(baseDirectory, WebUtility.UrlDecode(m.Groups["src"].Value));
-            if (!File.Exists(path))
+            if (svgFor(WebUtility.UrlDecode(m.Groups["src"].Value)) is not { } svg)
             {
                 return m.Value;
             }
 
-            var svg = File.ReadAllText(path, Encoding.UTF8);
             var start = svg.IndexOf("<svg", StringComparison.Ordinal);
             return $"<figure class=\"chart\" aria-label=\"{m.Groups["alt"].Value}\">{(start >= 0 ? svg[start..] : svg)}</figure>";
         });

@@ -1,4 +1,5 @@
 using System.Text;
+using SpecLint.Core.Files;
 using SpecLint.Rules.Checking;
 
 namespace SpecLint.Reporting.Plots;
@@ -14,6 +15,22 @@ internal static class PlotFiles
     {
         ArgumentNullException.ThrowIfNull(run);
         var folder = Path.Combine(reportDirectory, plotFolderName);
+        return Build(run, plotFolderName, (file, svg) =>
+        {
+            AtomicFile.CreateFolder(Path.Combine(plotFolderName, file), folder);
+            AtomicFile.WriteAllText(Path.Combine(folder, file), svg);
+        });
+    }
+
+    /// <summary>
+    /// Renders every chart and hands each SVG to <paramref name="sink"/> (file name, text) one at a time, so a
+    /// caller can write or inline it without all charts of a large run being held at once; returns the
+    /// per-spec Markdown that links them under <paramref name="plotFolderName"/>.
+    /// </summary>
+    public static IReadOnlyDictionary<string, string> Build(CheckRun run, string plotFolderName, Action<string, string> sink)
+    {
+        ArgumentNullException.ThrowIfNull(run);
+        ArgumentNullException.ThrowIfNull(sink);
         var links = new Dictionary<string, string>(StringComparer.Ordinal);
         foreach (var spec in run.Specs)
         {
@@ -22,12 +39,11 @@ internal static class PlotFiles
                 continue;
             }
 
-            Directory.CreateDirectory(folder);
             var md = new StringBuilder();
             foreach (var (suffix, chart) in SpecPlots.Build(analysis, spec.Name))
             {
                 var file = $"{SafeName(spec.Name)}.{suffix}.svg";
-                SvgChartWriter.WriteFile(chart with { Id = SafeName(spec.Name) + "-" + suffix }, Path.Combine(folder, file));
+                sink(file, SvgChartWriter.Write(chart with { Id = SafeName(spec.Name) + "-" + suffix }));
                 md.Append("![").Append(chart.Title).Append("](").Append(plotFolderName).Append('/').Append(file).Append(")\n\n");
             }
 

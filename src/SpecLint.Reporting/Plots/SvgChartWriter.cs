@@ -48,7 +48,7 @@ internal static class SvgChartWriter
     }
 
     /// <summary>Writes the SVG to a file as UTF-8 without BOM.</summary>
-    public static void WriteFile(Chart chart, string path) => File.WriteAllText(path, Write(chart), new UTF8Encoding(false));
+    public static void WriteFile(Chart chart, string path) => SpecLint.Core.Files.AtomicFile.WriteAllText(path, Write(chart));
 
     private static XElement Build(Chart chart)
     {

@@ -11,7 +11,7 @@ namespace SpecLint.Reporting.Terminal;
 internal static class TerminalReport
 {
     /// <summary>Writes the findings and the summary.</summary>
-    public static void Write(CheckRun run, TextWriter output, bool color)
+    public static void Write(CheckRun run, TextWriter output, bool color, bool outputFailed = false)
     {
         ArgumentNullException.ThrowIfNull(run);
         ArgumentNullException.ThrowIfNull(output);
@@ -20,7 +20,7 @@ internal static class TerminalReport
             output.WriteLine(Line(f, color));
         }
 
-        output.WriteLine(Summary(run));
+        output.WriteLine(Summary(run, outputFailed));
     }
 
     /// <summary>One finding as a line, optionally with the severity coloured.</summary>
@@ -37,7 +37,9 @@ internal static class TerminalReport
     }
 
     /// <summary>The closing summary line(s).</summary>
-    public static string Summary(CheckRun run)
+    /// <param name="run">The run.</param>
+    /// <param name="outputFailed">True when a report file could not be written (already reported); the result is then "fail".</param>
+    public static string Summary(CheckRun run, bool outputFailed = false)
     {
         ArgumentNullException.ThrowIfNull(run);
         var all = run.AllFindings.ToList();
@@ -57,7 +59,7 @@ internal static class TerminalReport
             text += string.Create(CultureInfo.InvariantCulture, $"; {unusable} file{Plural(unusable)} could not be read");
         }
 
-        var verdict = run.ExitCode switch
+        var verdict = outputFailed ? "fail: an output could not be written" : run.ExitCode switch
         {
             ExitCodes.Clean => $"pass (fail level: {run.FailOn.Name()})",
             ExitCodes.FindingsAtFailLevel => $"fail: findings at or above '{run.FailOn.Name()}'",

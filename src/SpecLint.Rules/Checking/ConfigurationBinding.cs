@@ -57,7 +57,10 @@ internal static class ConfigurationBinding
             if (rule is null)
             {
                 var known = catalog.Rules.Select(r => r.Descriptor.Id).ToList();
-                var hint = EditDistance.Closest(id, known) is { } s ? $" (did you mean '{s}'?)" : "";
+                // Case is ignored when suggesting: "Phase-Margin" is plainly phase-margin.
+                var hint = known.FirstOrDefault(k => string.Equals(k, id, StringComparison.OrdinalIgnoreCase)) is { } same
+                    ? $" (did you mean '{same}'? ids are lower case)"
+                    : EditDistance.Closest(id.ToLowerInvariant(), known) is { } s ? $" (did you mean '{s}'?)" : "";
                 yield return Problem(displayPath, KeyOf(settings.Position), "/rules/" + id, $"rules: '{id}' is not a rule{hint}; 'speclint rules' lists the ids");
                 continue;
             }
@@ -74,10 +77,10 @@ internal static class ConfigurationBinding
                     continue;
                 }
 
-                if (!QuantityParser.TryParse(option.RawText, declared.Dimension, out var parsed, out var error) || parsed!.Form != ToleranceForm.None)
+                if (!OptionValues.TryRead(declared, option.RawText, out _, out var error))
                 {
                     yield return Problem(displayPath, option.Position, $"/rules/{id}/{key}",
-                        $"rules.{id}.{key}: {error ?? "takes one value, not a tolerance or range"}; write e.g. \"{declared.Default}\"");
+                        $"rules.{id}.{key}: {error}; write e.g. \"{declared.Default}\"");
                 }
             }
         }

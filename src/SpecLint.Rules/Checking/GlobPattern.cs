@@ -17,7 +17,9 @@ internal sealed class GlobPattern
     {
         ArgumentNullException.ThrowIfNull(pattern);
         Pattern = pattern;
-        _regex = new Regex("^" + Translate(pattern.Replace('\\', '/').TrimStart('/')) + "$", RegexOptions.CultureInvariant);
+        // The non-backtracking engine matches in time linear in the path, whatever the pattern: a glob of many
+        // "**/" segments would otherwise backtrack for minutes on a deep path that almost matches.
+        _regex = new Regex("^" + Translate(pattern.Replace('\\', '/').TrimStart('/')) + "$", RegexOptions.CultureInvariant | RegexOptions.NonBacktracking);
     }
 
     /// <summary>The glob as written.</summary>

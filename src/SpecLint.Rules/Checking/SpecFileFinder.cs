@@ -1,3 +1,5 @@
+using SpecLint.Core.Files;
+
 namespace SpecLint.Rules.Checking;
 
 /// <summary>
@@ -53,13 +55,21 @@ internal static class SpecFileFinder
             {
                 entries = Directory.EnumerateFileSystemEntries(dir).ToList();
             }
-            catch (UnauthorizedAccessException)
+            catch (Exception e) when (e is UnauthorizedAccessException or IOException)
             {
                 continue;
             }
 
             foreach (var e in entries)
             {
+                // Linked folders are not followed: a link to ".." would check the same specs again and again,
+                // and a link to "/" would walk the whole filesystem. Linked files are taken only when they stay
+                // inside the folder being walked, so the walk never reads outside it.
+                if (FileKinds.IsSymbolicLink(e) && (Directory.Exists(e) || !Inside(root, e)))
+                {
+                    continue;
+                }
+
                 if (Directory.Exists(e))
                 {
                     if (!SkippedFolders.Contains(Path.GetFileName(e), StringComparer.Ordinal))
@@ -72,6 +82,20 @@ internal static class SpecFileFinder
                     yield return e;
                 }
             }
+        }
+    }
+
+    private static bool Inside(string root, string link)
+    {
+        try
+        {
+            var target = File.ResolveLinkTarget(link, returnFinalTarget: true)?.FullName;
+            var top = Path.TrimEndingDirectorySeparator(Path.GetFullPath(root)) + Path.DirectorySeparatorChar;
+            return target is not null && target.StartsWith(top, StringComparison.Ordinal);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            return false;
         }
     }
 

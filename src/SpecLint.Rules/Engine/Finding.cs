@@ -1,3 +1,5 @@
+using SpecLint.Core.Text;
+
 namespace SpecLint.Rules.Engine;
 
 /// <summary>One problem found in one spec, located at the key that drives it.</summary>
@@ -23,6 +25,15 @@ public sealed record Finding(
     bool Waived = false,
     string? WaiverReason = null)
 {
+    /// <summary>The spec file as given, control characters shown as escapes (see <see cref="TextSafety"/>).</summary>
+    public string File { get; init; } = TextSafety.ForTerminal(File);
+
+    /// <summary>The message, control characters shown as escapes: it may quote a value from the file.</summary>
+    public string Message { get; init; } = TextSafety.ForTerminal(Message);
+
+    /// <summary>The waiver's reason as written in the spec, control characters shown as escapes.</summary>
+    public string? WaiverReason { get; init; } = WaiverReason is null ? null : TextSafety.ForTerminal(WaiverReason);
+
     /// <summary>The terminal form of references.md §D6: <c>file:line:col: severity rule-id: message</c>.</summary>
     public override string ToString() =>
         $"{File}:{Line}:{Column}: {Severity.Name()} {RuleId}: {Message}{(Waived ? " (waived: " + WaiverReason + ")" : "")}";

@@ -101,8 +101,9 @@ public sealed class RuleContext
                 $"option '{key}' of rule '{descriptor.Id}' is declared as {option.Dimension}, but was read as {w}; read it as the type of its dimension", nameof(key));
         }
 
-        return configuration.Options.TryGetValue(key, out var text)
-            ? QuantityParser.ParseSingle(text, option.Dimension)
+        // An unusable value was already reported as config-invalid (exit 2); the rule runs on its default.
+        return configuration.Options.TryGetValue(key, out var text) && OptionValues.TryRead(option, text, out var si, out _)
+            ? si
             : option.DefaultSi;
     }
 }

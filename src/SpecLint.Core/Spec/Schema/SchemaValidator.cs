@@ -61,6 +61,7 @@ internal sealed partial class SchemaValidator
 
         var violations = new List<SchemaViolation>();
         var seen = new HashSet<(string, string, string)>();
+        var state = new WordingState();
         foreach (var r in new[] { results }.Concat(results.Details ?? []))
         {
             if (r.IsValid || r.Errors is null)
@@ -78,7 +79,7 @@ internal sealed partial class SchemaValidator
                 var evaluationPath = r.EvaluationPath.ToString();
                 var keyword = key.Length > 0 ? key : JsonPointerText.Split(evaluationPath) is { Count: > 0 } e ? e[^1] : "false";
                 var owner = ResolveEvaluationPath(key.Length > 0 ? evaluationPath : JsonPointerText.Parent(evaluationPath));
-                foreach (var v in Word(keyword, at, owner, root, libraryMessage))
+                foreach (var v in Word(keyword, at, owner, root, libraryMessage, state))
                 {
                     if (seen.Add((v.Pointer, v.Keyword, v.Message)))
                     {
@@ -105,7 +106,7 @@ internal sealed partial class SchemaValidator
     [GeneratedRegex("did you mean \"([^\"]+)\"", RegexOptions.CultureInvariant)]
     private static partial Regex SuggestionRegex();
 
-    private IEnumerable<SchemaViolation> Word(string keyword, string at, JsonNode? owner, JsonNode? root, string libraryMessage)
+    private IEnumerable<SchemaViolation> Word(string keyword, string at, JsonNode? owner, JsonNode? root, string libraryMessage, WordingState state)
     {
         var instance = Find(root, at);
         var propertySchema = PropertySchema(at);
@@ -117,8 +118,9 @@ internal sealed partial class SchemaValidator
             {
                 var name = JsonPointerText.Split(at) is { Count: > 0 } t ? t[^1] : "";
                 var allowed = (owner?["properties"] as JsonObject)?.Select(p => p.Key).ToList() ?? [];
-                var parentKeys = (Find(root, JsonPointerText.Parent(at)) as JsonObject)?.Select(p => p.Key).ToHashSet(StringComparer.Ordinal) ?? [];
-                var suggestion = EditDistance.Closest(name, allowed.Where(a => !parentKeys.Contains(a)));
+                var suggestion = state.SuggestionsLeft-- > 0 && name.Length <= WordingState.LongestSuggestedKey
+                    ? EditDistance.Closest(name, allowed.Where(a => !state.KeysOf(root, JsonPointerText.Parent(at)).Contains(a)))
+                    : null;
                 var hint = suggestion is not null ? $"did you mean \"{suggestion}\"? " : "";
                 var list = allowed.Count > 0 ? $"allowed keys here: {string.Join(", ", allowed)}" : "no keys are allowed here";
                 yield return new(at, keyword, $"unknown key \"{name}\"; {hint}{list}", ViolationLocation.Key);
@@ -387,5 +389,29 @@ internal sealed partial class SchemaValidator
         }
 
         return node;
+    }
+
+    /// <summary>
+    /// Per-validation memory that keeps wording linear in the number of problems: a file of thousands of unknown
+    /// keys gets did-you-mean hints for the first ones only, and each map's own keys are collected once.
+    /// </summary>
+    private sealed class WordingState
+    {
+        public const int LongestSuggestedKey = 64;
+
+        private readonly Dictionary<string, HashSet<string>> _keys = new(StringComparer.Ordinal);
+
+        public int SuggestionsLeft { get; set; } = 100;
+
+        public HashSet<string> KeysOf(JsonNode? root, string pointer)
+        {
+            if (!_keys.TryGetValue(pointer, out var keys))
+            {
+                keys = (Find(root, pointer) as JsonObject)?.Select(p => p.Key).ToHashSet(StringComparer.Ordinal) ?? [];
+                _keys[pointer] = keys;
+            }
+
+            return keys;
+        }
     }
 }

@@ -10,6 +10,12 @@ namespace SpecLint.Core.Spec.Yaml;
 /// </summary>
 internal static partial class YamlScalarResolver
 {
+    /// <summary>
+    /// No bare number in a spec or configuration is anywhere near this; beyond it the schema library's exact
+    /// (decimal) comparison fails, so larger values are refused here with a message instead.
+    /// </summary>
+    private const double LargestNumber = 1e28;
+
     [GeneratedRegex(@"^[-+]?[0-9]+$", RegexOptions.CultureInvariant)]
     private static partial Regex IntRegex();
 
@@ -42,6 +48,12 @@ internal static partial class YamlScalarResolver
                 return true;
         }
 
+        if (IntRegex().IsMatch(text) && text.TrimStart('+', '-').TrimStart('0').Length > 28)
+        {
+            error = $"\"{text}\" is too large a number";
+            return false;
+        }
+
         if (IntRegex().IsMatch(text))
         {
             value = long.TryParse(text, NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture, out var l)
@@ -68,7 +80,7 @@ internal static partial class YamlScalarResolver
         if (FloatRegex().IsMatch(text))
         {
             var d = double.Parse(text, NumberStyles.Float, CultureInfo.InvariantCulture);
-            if (double.IsInfinity(d))
+            if (double.IsInfinity(d) || Math.Abs(d) > LargestNumber)
             {
                 error = $"\"{text}\" is too large a number";
                 return false;

@@ -4,6 +4,7 @@ using System.Globalization;
 using System.Text;
 using System.Text.Json.Nodes;
 using System.Text.RegularExpressions;
+using SpecLint.Core.Text;
 using YamlDotNet.Core;
 using YamlDotNet.Core.Events;
 
@@ -72,6 +73,11 @@ internal static partial class YamlTreeReader
         if (text.Length > MaxFileBytes)
         {
             return Fail(1, 1, $"the file is over {MaxFileBytes.ToString(CultureInfo.InvariantCulture)} bytes (1 MiB); split it into one file per channel");
+        }
+
+        if (TextScreen.FindDisallowed(text) is { } bad)
+        {
+            return Fail(bad.Line, bad.Column, bad.Message);
         }
 
         var state = new ReaderState(new Parser(new StringReader(text)), text);
@@ -191,7 +197,7 @@ internal static partial class YamlTreeReader
                     throw new FatalProblem(second.Start, "", "the file holds more than one YAML document (a second \"---\"); put each channel in its own file");
                 }
 
-                return new YamlTree(root, true, _positions, _scalarText, [.. _problems]);
+                return new YamlTree(root, true, _positions, _scalarText, Clamped());
             }
             catch (FatalProblem f)
             {
@@ -215,7 +221,28 @@ internal static partial class YamlTreeReader
                     "YAML syntax: the file ends inside a { } or [ ]; a closing bracket is missing"));
             }
 
-            return new YamlTree(null, false, _positions, _scalarText, [.. _problems]);
+            return new YamlTree(null, false, _positions, _scalarText, Clamped());
+        }
+
+        /// <summary>
+        /// The parser places an error at the end of the input one line past the last line break; a position
+        /// outside the file helps no one (an editor cannot jump there), so it is moved to the end of the last line.
+        /// </summary>
+        private ImmutableArray<YamlProblem> Clamped()
+        {
+            var lines = text.Split(["\r\n", "\n", "\r"], StringSplitOptions.None);
+            var lastLine = lines.Length;
+            while (lastLine > 1 && lines[lastLine - 1].Length == 0)
+            {
+                lastLine--;
+            }
+
+            return [.. _problems.Select(p =>
+            {
+                var line = Math.Min(p.Line, lastLine);
+                var column = Math.Min(p.Column, lines[line - 1].Length + 1);
+                return p.Line == line && p.Column == column ? p : p with { Line = line, Column = column };
+            })];
         }
 
         private static int Line(Mark m) => (int)Math.Max(1, m.Line);
@@ -273,12 +300,10 @@ internal static partial class YamlTreeReader
                 return;
             }
 
-            if (scalar && tag.Value == "tag:yaml.org,2002:str")
-            {
-                return;
-            }
-
-            _problems.Add(new YamlProblem(Line(start), Column(start), pointer, $"the YAML tag \"{tag.Value}\" is not supported in spec files; remove it (quote a value to keep it as text)"));
+            // Every tag is refused, !!str included: a spec types its values by key, and a tag the reader
+            // ignored (on a key, say) would make the file mean something other than what it shows.
+            var what = scalar ? "" : " on a map or list";
+            _problems.Add(new YamlProblem(Line(start), Column(start), pointer, $"the YAML tag \"{TextSafety.ForTerminal(tag.Value)}\"{what} is not supported in spec files; remove it (quote a value to keep it as text)"));
         }
 
         private void Record(string pointer, Mark start, Mark end, Mark? keyMark)
@@ -320,6 +345,7 @@ internal static partial class YamlTreeReader
                 }
 
                 Count(key, pointer);
+                CheckTag(JsonPointerText.Append(pointer, key.Value), key.Start, key.Tag, scalar: true);
                 parser.MoveNext();
                 var childPointer = JsonPointerText.Append(pointer, key.Value);
                 if (key.Value == "<<" && key.Style == ScalarStyle.Plain)
