@@ -55,8 +55,9 @@ public sealed class ParallelCheckTests
     {
         var sb = new StringBuilder();
         using (var w = new StringWriter(sb))
+        using (var e = new StringWriter(sb))
         {
-            Outputs.Write(run, new OutputRequest(format), w);
+            Outputs.Write(run, new OutputRequest(format), w, e);
         }
 
         return sb.ToString();

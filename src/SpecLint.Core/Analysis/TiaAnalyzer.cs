@@ -117,8 +117,9 @@ public static class TiaAnalyzer
         var (wLo, wHi) = model.CharacteristicRange();
         var uLo = Math.Log(wLo / ScanMargin);
         var uHi = Math.Log(wHi * ScanMargin);
-        var du = Math.Log(10) / pointsPerDecade;
-        var n = (int)Math.Ceiling((uHi - uLo) / du);
+        // The same points as the full scan, its cap included.
+        var du = Math.Max(Math.Log(10) / pointsPerDecade, (uHi - uLo) / MaxScanPoints);
+        var n = double.IsFinite(du) && du > 0 ? (int)Math.Min(Math.Ceiling((uHi - uLo) / du), MaxScanPoints) : 0;
 
         // |ln|T|| ≤ 3·du at both ends is what sends an interval without a sign change to the crossing search;
         // |T|² outside e^(±6·du), widened by a hair against rounding, rules that out without a logarithm.
