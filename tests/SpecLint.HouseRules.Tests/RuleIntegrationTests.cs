@@ -68,6 +68,25 @@ public sealed class RuleIntegrationTests
         Assert.Contains("declared as Angle, but was read as Capacitance", failed.Message, StringComparison.Ordinal);
     }
 
+    [Theory]
+    [InlineData("5 kg", "needs a unit")]
+    [InlineData("2", "expected text")]
+    [InlineData("1 ms", "outside 10 ms .. 10 min")]
+    [InlineData("2 h", "needs a unit")]
+    [InlineData("forever s", "is not a duration")]
+    public void A_house_rule_budget_that_is_not_a_duration_in_range_is_a_configuration_error(string budget, string why)
+    {
+        using var repo = new HouseRuleRepo($"house-rules: [house-rules/]\nhouse-rule-budget: {budget}\n");
+        repo.Write("house-rules/rf-max/RfMaxRule.cs", Sources.RfMaxRule());
+        repo.Write("a.tia.yaml", Sources.Spec);
+
+        var problem = Assert.Single(repo.Check().RunProblems);
+
+        Assert.Equal(RuleIds.ConfigInvalid, problem.RuleId);
+        Assert.Equal(2, problem.Line);
+        Assert.Contains(why, problem.Message, StringComparison.Ordinal);
+    }
+
     [Fact]
     public void A_waiver_in_the_spec_covers_a_house_rule_finding()
     {

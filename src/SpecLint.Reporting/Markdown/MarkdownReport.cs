@@ -60,6 +60,14 @@ internal sealed class MarkdownReport
         var files = _run.Specs.Length;
         Line($"SpecLint {ToolVersion} checked {files} spec file{(files == 1 ? "" : "s")}; fail level `{_run.FailOn.Name()}`; " +
              (_run.ConfigFiles.IsEmpty ? "no `.speclint.yaml` (built-in defaults)." : "configuration " + string.Join(", ", _run.ConfigFiles.Select(c => $"`{Rel(c)}`")) + "."));
+        var houseRules = _run.Catalog.Rules.Select(r => r.Descriptor.Id).Where(_run.Catalog.IsHouseRule).ToList();
+        if (houseRules.Count > 0)
+        {
+            Line();
+            Line("House rules of this repository ran beside the built-in rules: " +
+                 string.Join(", ", houseRules.Select(id => $"`{id}` ({Rel(_run.Catalog.HouseRuleSource(id)!)})")) + ".");
+        }
+
         if (options.GeneratedAt is { } at)
         {
             Line();
