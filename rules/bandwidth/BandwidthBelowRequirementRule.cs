@@ -1,4 +1,5 @@
 using SpecLint.Core.Analysis;
+using SpecLint.Core.Spec.Model;
 using SpecLint.Core.Units;
 using SpecLint.Rules.Engine;
 using SpecLint.Rules.Fixes;
@@ -35,30 +36,61 @@ public sealed class BandwidthBelowRequirementRule : IRule
             ? $"{Fmt.Hz(nominal)} at nominal but {Fmt.Hz(t.BandwidthMin)} at {t.BandwidthMinAt.Describe()}"
             : $"{Fmt.Hz(nominal)} at nominal";
         var floor = PhaseMarginBelowFloorRule.FloorFor(context);
-        var fix = LargestCfMeeting(context, required, floor);
-        var advice = fix is { } c
-            ? $" Cf = {SpecEdits.CfText(context.Spec, c)} meets it with the {floor.Degrees:0.#}° phase-margin floor kept (re-checked)."
-            : $" No standard Cf meets it while keeping the {floor.Degrees:0.#}° phase-margin floor: lower Rf, reduce the input capacitance, or use an op-amp with more GBW.";
+        var search = SearchCf(context, required, floor);
+        var advice = search.Value is { } v
+            ? $" Cf = {SpecEdits.CfText(context.Spec, new Capacitance(v))} meets it with the {floor.Degrees:0.#}° phase-margin floor kept (re-checked)."
+            : Unreachable(context, search, floor);
         yield return context.Report("/requirements/bandwidth",
             $"the closed-loop bandwidth is {where}, below the required {Fmt.Hz(required)}." + advice,
-            fix is { } v ? new FixSuggestion("/feedback/capacitance", SpecEdits.CfText(context.Spec, v)) : null);
+            search.Value is { } c ? new FixSuggestion("/feedback/capacitance", SpecEdits.CfText(context.Spec, new Capacitance(c))) : null);
     }
 
     /// <summary>The largest standard Cf at or below the current one that meets the bandwidth and the floor at every corner.</summary>
     public static Capacitance? LargestCfMeeting(RuleContext context, Frequency required, Angle floor)
     {
         ArgumentNullException.ThrowIfNull(context);
+        return SearchCf(context, required, floor).Value is { } f ? new Capacitance(f) : null;
+    }
+
+    // Walks down from the current Cf. A candidate must meet the bandwidth, keep the floor, and stay a real part
+    // (feedback-capacitor-size's minimum, so that this fix does not trip that rule); a failed search names the
+    // rule that stopped the candidate that came closest.
+    private static FixSearchResult SearchCf(RuleContext context, Frequency required, Angle floor)
+    {
         if (context.Spec.Feedback.Capacitance is not { } cf)
         {
-            return null;
+            return FixSearchResult.NotSearched;
         }
 
+        var smallest = CfForFloor.SmallestPart(context);
+        var analysed = new Dictionary<TiaSpec, SpecAnalysis>(ReferenceEqualityComparer.Instance);
+        SpecAnalysis Of(TiaSpec s) => analysed.TryGetValue(s, out var a) ? a : analysed[s] = context.Reanalyze(s);
         var series = StandardValueSearch.SeriesFor<Capacitance>(cf, ESeries.E12);
-        var found = StandardValueSearch.Find(context, series, cf.Typ.Farads, upward: false, c => SpecEdits.WithCf(context.Spec, new Capacitance(c)), edited =>
+        FixCondition[] conditions =
+        [
+            new(Info.Id, $"bandwidth ≥ {Fmt.Hz(required)}", s => Of(s).WorstBandwidthHz is { } b && b >= required.Hertz),
+            new(PhaseMarginBelowFloorRule.Info.Id, $"phase margin ≥ {floor.Degrees:0.#}°", s => Of(s).WorstPhaseMarginDeg is { } p && p >= floor.Degrees),
+            new(FeedbackCapacitorTooSmallRule.Info.Id, $"Cf ≥ {Fmt.Q(smallest)}", s => s.Feedback.Capacitance is { } c && c.Typ.Farads >= smallest.Farads * (1 - 1e-9)),
+        ];
+        return StandardValueSearch.Search(context, series, cf.Typ.Farads, upward: false, c => SpecEdits.WithCf(context.Spec, new Capacitance(c)), conditions, steps: 24);
+    }
+
+    private static string Unreachable(RuleContext context, FixSearchResult search, Angle floor)
+    {
+        const string Otherwise = "lower Rf, reduce the input capacitance, or use an op-amp with more GBW.";
+        if (search.Closest is not { } closest)
         {
-            var r = context.Reanalyze(edited);
-            return r.WorstBandwidthHz is { } b && b >= required.Hertz && r.WorstPhaseMarginDeg is { } p && p >= floor.Degrees;
-        }, steps: 24);
-        return found is { } f ? new Capacitance(f) : null;
+            return $" No standard Cf meets it while keeping the {floor.Degrees:0.#}° phase-margin floor: {Otherwise}";
+        }
+
+        if (search.RejectedBy == Info.Id)
+        {
+            return $" No standard Cf meets it, whatever the phase margin: {Otherwise}";
+        }
+
+        var text = SpecEdits.CfText(context.Spec, new Capacitance(closest));
+        return search.RejectedBy == PhaseMarginBelowFloorRule.Info.Id
+            ? $" No standard Cf meets it while keeping the {floor.Degrees:0.#}° phase-margin floor: phase-margin rejects Cf = {text}, the largest that meets the bandwidth, and every smaller one tried. Otherwise {Otherwise}"
+            : $" Cf = {text} would meet it with the {floor.Degrees:0.#}° phase-margin floor kept, but {search.RejectedBy} rejects it ({search.Requirement}). Otherwise {Otherwise}";
     }
 }

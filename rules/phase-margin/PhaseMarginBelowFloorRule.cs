@@ -59,10 +59,14 @@ public sealed class PhaseMarginBelowFloorRule : IRule
     // Searched only once the margin fails: each candidate costs a full corner analysis.
     private static (FixSuggestion? Fix, string Text) Fix(RuleContext context, Angle floor)
     {
-        var fix = CfForFloor.Find(context, floor);
-        return (fix, fix is null
-            ? " No standard Cf restores it: reduce the input capacitance or Rf, or use an op-amp with more GBW."
-            : $" Use Cf = {fix.Value} (re-checked{(context.Tolerances is null ? "" : " at every corner")}).");
+        var search = CfForFloor.Search(context, floor);
+        var fix = search.Value is { } v ? new FixSuggestion("/feedback/capacitance", SpecEdits.CfText(context.Spec, new Capacitance(v))) : null;
+        var fixText = fix is not null
+            ? $" Use Cf = {fix.Value} (re-checked{(context.Tolerances is null ? "" : " at every corner")})."
+            : search.Closest is { } closest && search.RejectedBy != Info.Id
+                ? $" Cf = {SpecEdits.CfText(context.Spec, new Capacitance(closest))} would restore it, but {search.RejectedBy} rejects it ({search.Requirement}): reduce the input capacitance or Rf, or use an op-amp with more GBW."
+                : " No standard Cf restores it: reduce the input capacitance or Rf, or use an op-amp with more GBW.";
+        return (fix, fixText);
     }
 
     private static string NeverCrosses(AnalysisResult a) => string.Create(CultureInfo.InvariantCulture,

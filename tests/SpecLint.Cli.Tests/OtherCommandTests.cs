@@ -66,7 +66,7 @@ public sealed class OtherCommandTests
         using var cli = new CliHarness();
         var (exit, output, _) = cli.Run("rules");
         Assert.Equal(0, exit);
-        foreach (var id in new[] { "phase-margin", "output-headroom", "thermal-vs-shot-noise", "capacitor-tolerance", "bandwidth", "peaking", "min-stable-gain", "noise-floor", "feedback-capacitor-size", "standard-values", "slew-rate", "high-voltage" })
+        foreach (var id in new[] { "phase-margin", "output-headroom", "thermal-vs-shot-noise", "capacitor-tolerance", "bandwidth", "peaking", "min-stable-gain", "noise-floor", "feedback-capacitor-size", "standard-values", "slew-rate", "high-voltage", "plausible-values" })
         {
             Assert.Contains(id, output, StringComparison.Ordinal);
         }

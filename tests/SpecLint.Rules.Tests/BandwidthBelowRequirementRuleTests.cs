@@ -76,6 +76,54 @@ public sealed class BandwidthBelowRequirementRuleTests
         var f = Lint.Check(WorkedExample("1.7841 pF", "  bandwidth: [|1 MHz|]")).SingleAtMark(Id, Severity.Error);
 
         Assert.Null(f.Fix);
-        Assert.Contains("No standard Cf meets it", f.Message, StringComparison.Ordinal);
+        // The bandwidth itself is out of reach: the message does not blame the phase-margin floor.
+        Assert.Contains("No standard Cf meets it, whatever the phase margin", f.Message, StringComparison.Ordinal);
+    }
+
+    // A 1 GΩ channel: Cf 1 pF gives 1/(2π·1 GΩ·1 pF) = 159 Hz (references.md §1); 1 kHz needs Cf ≲ 0.16 pF,
+    // below feedback-capacitor-size's 0.5 pF minimum.
+    private static string GigaohmChannel(string cf) => $$"""
+        {{Parts.Header}}
+        conditions: { temperature: 25 °C, supply: { positive: 12 V, negative: -12 V } }
+        bias: 0 V
+        input: { type: photodiode, capacitance: 5 pF, current: { min: 100 pA, max: 5 nA } }
+        {{Parts.IdealAmp}}
+        feedback:
+          resistance: 1 GΩ
+          capacitance: {{cf}}
+        requirements:
+          bandwidth: [|1 kHz|]
+          phase-margin: 50°
+        """;
+
+    [Fact]
+    public void A_failed_fix_search_names_the_rule_that_rejected_the_candidates()
+    {
+        var f = Lint.Check(GigaohmChannel("1 pF")).SingleAtMark(Id, Severity.Error);
+
+        // 0.15 pF meets 1 kHz with the floor kept, but it is not a real part by feedback-capacitor-size's measure.
+        Assert.Null(f.Fix);
+        Assert.Contains("Cf = 0.15 pF would meet it with the 50° phase-margin floor kept, but feedback-capacitor-size rejects it (Cf ≥ 0.5 pF)", f.Message, StringComparison.Ordinal);
+        Assert.DoesNotContain("No standard Cf meets it", f.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void The_same_search_suggests_the_capacitor_once_the_minimum_allows_it()
+    {
+        var r = Lint.Check(GigaohmChannel("1 pF"), "rules:\n  feedback-capacitor-size: { min: 0.1 pF }");
+        var f = r.Single(Id);
+
+        Assert.Equal("0.15 pF", f.Fix!.Value);
+        r.ApplyFixAndRecheck(f);
+    }
+
+    [Fact]
+    public void Never_suggests_a_capacitor_below_the_size_minimum()
+    {
+        // 1 MHz is out of reach (see above); on the 1 GΩ channel 1 kHz is reachable only below the minimum.
+        foreach (var f in new[] { Lint.Check(GigaohmChannel("1 pF")).Single(Id), Lint.Check(WorkedExample("1.7841 pF", "  bandwidth: 130 kHz")).Single(Id) })
+        {
+            Assert.True(f.Fix is null || QuantityParser.Parse(f.Fix.Value, Dimension.Capacitance).Typ >= 0.5e-12, f.Message);
+        }
     }
 }

@@ -189,4 +189,18 @@ public sealed class PhaseMarginBelowFloorRuleTests
         var f = r.SingleAtMark(Id, Severity.Error);
         Assert.Contains("never reaches 1", f.Message, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void Names_the_rule_that_rejects_every_capacitor_that_restores_the_floor()
+    {
+        // On this loop (values from the tool's own exact model): Cf 1.2 pF gives PM 50.2° and 162 kHz; 1.5 pF,
+        // the first E12 value with PM ≥ 55° (59.0°), gives 144 kHz, below the 150 kHz required, and larger values
+        // less still. The floor can be restored, but only by breaking the bandwidth requirement.
+        var r = Lint.Check(WorkedExample("[|1.2 pF|]", "requirements:\n  phase-margin: 55°\n  bandwidth: 150 kHz"));
+
+        var f = r.SingleAtMark(Id, Severity.Error);
+        Assert.Null(f.Fix);
+        Assert.Contains("Cf = 1.5 pF would restore it, but bandwidth rejects it", f.Message, StringComparison.Ordinal);
+        r.Clean("bandwidth");
+    }
 }

@@ -30,6 +30,9 @@ internal sealed record RepoConfig(
     /// </summary>
     public ImmutableArray<string> HouseRules { get; init; } = [];
 
+    /// <summary>Glob patterns of files left out of a folder check, relative to the configuration's folder.</summary>
+    public ImmutableArray<string> Exclude { get; init; } = [];
+
     /// <summary>How long one house rule may run on one spec before it is stopped.</summary>
     public TimeSpan HouseRuleBudget { get; init; } = DefaultHouseRuleBudget;
 

@@ -102,6 +102,10 @@ internal static class RepoConfigLoader
             && inc.All(n => n is JsonValue v && v.GetValueKind() == JsonValueKind.String)
             ? [.. inc.Select(n => n!.GetValue<string>())]
             : d.Include;
+        ImmutableArray<string> exclude = Ok("/exclude", sink) && obj["exclude"] is JsonArray exc
+            && exc.All(n => n is JsonValue v && v.GetValueKind() == JsonValueKind.String)
+            ? [.. exc.Select(n => n!.GetValue<string>())]
+            : [];
         var failOn = Ok("/fail-on", sink) && obj["fail-on"] is JsonValue f ? ParseSeverity(f.GetValue<string>()) : d.FailOn;
 
         var mc = d.MonteCarlo;
@@ -167,6 +171,7 @@ internal static class RepoConfigLoader
         {
             HouseRules = houseRules,
             HouseRuleBudget = budget,
+            Exclude = exclude,
         };
         return new RepoConfigLoadResult(config, sink.ToImmutable());
     }

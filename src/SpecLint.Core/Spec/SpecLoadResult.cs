@@ -10,4 +10,7 @@ internal sealed record SpecLoadResult(TiaSpec? Spec, ImmutableArray<SpecDiagnost
 {
     /// <summary>True when the file loaded without a problem.</summary>
     public bool IsValid => Spec is not null && Diagnostics.IsEmpty;
+
+    /// <summary>The file could not be read at all (missing, no permission, too large, not a regular file): nothing was parsed.</summary>
+    public bool Unreadable { get; init; }
 }

@@ -24,17 +24,17 @@ internal static class SpecLoader
             if (FileKinds.Of(path) == FileKind.Regular && info.Length > YamlTreeReader.MaxFileBytes)
             {
                 // Checked before reading so a huge file is never pulled into memory.
-                return new SpecLoadResult(null, [new SpecDiagnostic(shown, 1, 1, SpecDiagnostic.SpecInvalid, "", YamlTreeReader.TooLargeMessage(info.Length))]);
+                return new SpecLoadResult(null, [new SpecDiagnostic(shown, 1, 1, SpecDiagnostic.SpecInvalid, "", YamlTreeReader.TooLargeMessage(info.Length))]) { Unreadable = true };
             }
 
             if (!BoundedFileReader.TryRead(path, YamlTreeReader.MaxFileBytes, out bytes, out var why))
             {
-                return new SpecLoadResult(null, [new SpecDiagnostic(shown, 1, 1, SpecDiagnostic.SpecInvalid, "", why)]);
+                return new SpecLoadResult(null, [new SpecDiagnostic(shown, 1, 1, SpecDiagnostic.SpecInvalid, "", why)]) { Unreadable = true };
             }
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException or NotSupportedException or ArgumentException)
         {
-            return new SpecLoadResult(null, [new SpecDiagnostic(shown, 1, 1, SpecDiagnostic.SpecInvalid, "", $"cannot read the file: {e.Message}")]);
+            return new SpecLoadResult(null, [new SpecDiagnostic(shown, 1, 1, SpecDiagnostic.SpecInvalid, "", $"cannot read the file: {e.Message}")]) { Unreadable = true };
         }
 
         return LoadBytes(bytes, shown);

@@ -46,7 +46,8 @@ internal static class TerminalReport
         int Count(Severity s) => all.Count(f => !f.Waived && f.Severity == s);
         var waived = all.Count(f => f.Waived);
         var specs = run.Specs.Length;
-        var unusable = run.Specs.Count(s => s.IsUnusable);
+        var unreadable = run.Specs.Count(s => s.IsUnreadable);
+        var invalid = run.Specs.Count(s => s.IsUnusable && !s.IsUnreadable);
         var text = string.Create(CultureInfo.InvariantCulture,
             $"{specs} spec{(specs == 1 ? "" : "s")} checked: {Count(Severity.Error)} error{Plural(Count(Severity.Error))}, {Count(Severity.Warning)} warning{Plural(Count(Severity.Warning))}, {Count(Severity.Note)} note{Plural(Count(Severity.Note))}");
         if (waived > 0)
@@ -54,9 +55,14 @@ internal static class TerminalReport
             text += string.Create(CultureInfo.InvariantCulture, $", {waived} waived");
         }
 
-        if (unusable > 0)
+        if (invalid > 0)
         {
-            text += string.Create(CultureInfo.InvariantCulture, $"; {unusable} file{Plural(unusable)} could not be read");
+            text += string.Create(CultureInfo.InvariantCulture, $"; {invalid} spec{Plural(invalid)} invalid");
+        }
+
+        if (unreadable > 0)
+        {
+            text += string.Create(CultureInfo.InvariantCulture, $"; {unreadable} file{Plural(unreadable)} could not be read");
         }
 
         var verdict = outputFailed ? "fail: an output could not be written" : run.ExitCode switch

@@ -4,6 +4,7 @@ using SpecLint.Core.Analysis.Tolerance;
 using SpecLint.Core.Config;
 using SpecLint.Core.Spec;
 using SpecLint.Core.Spec.Model;
+using SpecLint.Rules.BuiltIn;
 using SpecLint.Rules.Engine;
 
 namespace SpecLint.Rules.Checking;
@@ -30,7 +31,7 @@ internal static class CheckRunner
         var paths = options.Paths.Count > 0
             ? options.Paths
             : [rootConfig.Path is { } p ? Path.GetRelativePath(Directory.GetCurrentDirectory(), Path.GetDirectoryName(Path.GetFullPath(p))!) : "."];
-        var files = SpecFileFinder.Find(paths, rootConfig.Include, out var missing);
+        var files = SpecFileFinder.Find(paths, rootConfig.Include, rootConfig.Exclude, rootConfig.Folder, out var missing);
         if (options.HouseRules is not null)
         {
             // A house rule's cases carry deliberate mistakes; 'test-rules' runs them, a check of the tree does not
@@ -106,7 +107,7 @@ internal static class CheckRunner
             var bad = loaded.Diagnostics
                 .Select(d => new Finding(RuleIds.SpecInvalid, Severity.Error, d.File, d.Pointer, d.Line, d.Column, (d.KeyPath.Length > 0 ? d.KeyPath + ": " : "") + d.Message))
                 .ToImmutableArray();
-            return new SpecOutcome(file, null, null, null, null, bad);
+            return new SpecOutcome(file, null, null, null, null, bad) { IsUnreadable = loaded.Unreadable };
         }
 
         return CheckSpec(spec, config, options, tolerances);
@@ -131,14 +132,34 @@ internal static class CheckRunner
         catch (Exception e) when (AnalysisFailedException.IsNumericalFailure(e))
         {
             var at = spec.Locations.Locate("");
-            return new SpecOutcome(spec.File, spec, null, null, null,
-                [new Finding(RuleIds.AnalysisFailed, Severity.Error, spec.File, "", at.Line, at.Column, $"the analysis failed: {e.Message}; check the values for a typo in a prefix")]);
+            var failed = new Finding(RuleIds.AnalysisFailed, Severity.Error, spec.File, "", at.Line, at.Column, $"the analysis failed: {e.Message}; check the values for a typo in a prefix");
+            return new SpecOutcome(spec.File, spec, null, null, null, [failed, .. ImplausibleValues(spec, config, options.Catalog)]);
         }
 
         var all = WaiverApplication.Apply(spec, findings, options.Today, options.Catalog.KnownIds)
             .OrderBy(f => f.Line).ThenBy(f => f.Column).ThenBy(f => f.RuleId, StringComparer.Ordinal).ThenBy(f => f.Message, StringComparer.Ordinal)
             .ToImmutableArray();
         return new SpecOutcome(spec.File, spec, analysis.Circuit, analysis.Analysis, analysis.Tolerances, all);
+    }
+
+    // The plausibility check needs no analysis: when a value far off makes the analysis fail, it still names the
+    // value and the prefix that fits, which is most often the cause.
+    private static IEnumerable<Finding> ImplausibleValues(TiaSpec spec, RepoConfig config, RuleCatalog catalog)
+    {
+        var descriptor = ImplausibleValueRule.Info;
+        var ruleConfig = ConfigurationBinding.For(config, descriptor.Id);
+        if (!catalog.Rules.Any(r => r is ImplausibleValueRule) || ruleConfig.Off || !RuleRunner.AppliesTo(config, descriptor.Id, spec))
+        {
+            return [];
+        }
+
+        return ImplausibleValueRule.Problems(spec, key => RuleContext.OptionSi(descriptor, ruleConfig, key))
+            .Select(p =>
+            {
+                var where = spec.Locations.LocateKeyOrValue(p.Pointer);
+                return new Finding(descriptor.Id, ruleConfig.Severity ?? descriptor.DefaultSeverity, spec.File, p.Pointer, where.Line, where.Column, p.Message, p.Fix);
+            })
+            .ToList();
     }
 
     private static void CheckUniqueNames(List<SpecOutcome> outcomes, List<Finding> problems)

@@ -46,7 +46,7 @@ internal sealed class RuleRunner
             var context = new RuleContext(analysis, _analyzer, rule.Descriptor, ruleConfig, id => ConfigurationBinding.For(_config, id))
             {
                 SearchFixes = searchFixes,
-                OtherRulesCheck = baseline is null ? null : (candidate, ruleId) => NoNewErrors(original, candidate, ruleId, baseline),
+                OtherRulesCheck = baseline is null ? null : (candidate, ruleId) => NewErrors(original, candidate, ruleId, baseline),
             };
             foreach (var f in rule.Check(context))
             {
@@ -60,20 +60,26 @@ internal sealed class RuleRunner
     }
 
     // `rules: {id: {tags: [medical]}}` limits a rule to specs that carry one of the tags.
-    private bool AppliesTo(string ruleId, TiaSpec spec) =>
-        _config.ForRule(ruleId) is not { Tags.IsEmpty: false } settings
+    private bool AppliesTo(string ruleId, TiaSpec spec) => AppliesTo(_config, ruleId, spec);
+
+    /// <summary>Whether the configuration lets rule <paramref name="ruleId"/> run on <paramref name="spec"/> (its tags).</summary>
+    internal static bool AppliesTo(RepoConfig config, string ruleId, TiaSpec spec) =>
+        config.ForRule(ruleId) is not { Tags.IsEmpty: false } settings
         || settings.Tags.Any(t => spec.Tags.Contains(t, StringComparer.Ordinal));
 
     // A candidate may leave an unrelated error in place (a clipped output is not fixed by Cf), but must not
     // add a new one, nor leave an error that is about the very key being changed: two rules that both want a
     // different Cf must agree on one value.
-    private bool NoNewErrors(TiaSpec original, TiaSpec candidate, string ruleId, HashSet<string> baseline)
+    private IReadOnlyList<string> NewErrors(TiaSpec original, TiaSpec candidate, string ruleId, HashSet<string> baseline)
     {
         var changed = Fixes.SpecEdits.ChangedPointer(original, candidate);
         var analysis = _analyzer.Analyze(candidate, includeNoise: true, includeCorners: true);
-        return Run(analysis, searchFixes: false)
+        return [.. Run(analysis, searchFixes: false)
             .Where(f => f.Severity == Severity.Error && f.RuleId != ruleId)
-            .All(f => baseline.Contains(f.RuleId) && f.Pointer != changed);
+            .Where(f => !baseline.Contains(f.RuleId) || f.Pointer == changed)
+            .Select(f => f.RuleId)
+            .Distinct(StringComparer.Ordinal)
+            .Order(StringComparer.Ordinal)];
     }
 
     private static HashSet<string> ErrorIds(IEnumerable<Finding> findings) =>

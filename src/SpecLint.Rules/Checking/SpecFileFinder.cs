@@ -11,9 +11,21 @@ internal static class SpecFileFinder
     private static readonly string[] SkippedFolders = [".git", "bin", "obj", "node_modules"];
 
     /// <summary>Expands <paramref name="paths"/>; paths that do not exist are returned in <paramref name="missing"/>.</summary>
-    public static IReadOnlyList<string> Find(IEnumerable<string> paths, IReadOnlyList<string> includeGlobs, out IReadOnlyList<string> missing)
+    public static IReadOnlyList<string> Find(IEnumerable<string> paths, IReadOnlyList<string> includeGlobs, out IReadOnlyList<string> missing) =>
+        Find(paths, includeGlobs, [], null, out missing);
+
+    /// <summary>
+    /// The spec files under <paramref name="paths"/>: a file named is taken as it is; in a folder, a file is taken when
+    /// its path matches an include glob and no exclude glob. Paths are matched relative to <paramref name="baseFolder"/>
+    /// (the folder of the configuration file) when the file lies inside it, so <c>hw/**/*.tia.yaml</c> means the same
+    /// files whichever folder is given; otherwise relative to the folder given.
+    /// </summary>
+    public static IReadOnlyList<string> Find(
+        IEnumerable<string> paths, IReadOnlyList<string> includeGlobs, IReadOnlyList<string> excludeGlobs, string? baseFolder, out IReadOnlyList<string> missing)
     {
         var globs = includeGlobs.Select(g => new GlobPattern(g)).ToList();
+        var excluded = excludeGlobs.Select(g => new GlobPattern(g)).ToList();
+        var root = baseFolder is null ? null : Path.GetFullPath(baseFolder);
         var files = new SortedSet<string>(StringComparer.Ordinal);
         var gone = new List<string>();
         foreach (var path in paths)
@@ -26,8 +38,8 @@ internal static class SpecFileFinder
             {
                 foreach (var f in Walk(path))
                 {
-                    var relative = Path.GetRelativePath(path, f).Replace('\\', '/');
-                    if (globs.Any(g => g.IsMatch(relative)))
+                    var relative = RelativeTo(root, path, f);
+                    if (globs.Any(g => g.IsMatch(relative)) && !excluded.Any(g => g.IsMatch(relative)))
                     {
                         files.Add(Normalize(f));
                     }
@@ -41,6 +53,20 @@ internal static class SpecFileFinder
 
         missing = gone;
         return files.ToList();
+    }
+
+    private static string RelativeTo(string? root, string walked, string file)
+    {
+        if (root is not null)
+        {
+            var fromRoot = Path.GetRelativePath(root, Path.GetFullPath(file));
+            if (!Path.IsPathRooted(fromRoot) && fromRoot != ".." && !fromRoot.StartsWith("../", StringComparison.Ordinal) && !fromRoot.StartsWith("..\\", StringComparison.Ordinal))
+            {
+                return fromRoot.Replace('\\', '/');
+            }
+        }
+
+        return Path.GetRelativePath(walked, file).Replace('\\', '/');
     }
 
     private static IEnumerable<string> Walk(string root)

@@ -27,6 +27,9 @@ internal sealed record SpecOutcome(
     /// <summary>True when the file itself was unusable (spec-invalid).</summary>
     public bool IsUnusable => Spec is null || Findings.Any(f => f.RuleId == RuleIds.SpecInvalid);
 
+    /// <summary>The file itself could not be read, as opposed to read and found invalid.</summary>
+    public bool IsUnreadable { get; init; }
+
     /// <summary>The highest severity among unwaived findings, or null when there are none.</summary>
     public Severity? WorstSeverity => Findings.Where(f => !f.Waived).Select(f => (Severity?)f.Severity).Max();
 }

@@ -54,13 +54,19 @@ public sealed class RuleContext
     public bool SearchFixes { get; internal init; } = true;
 
     /// <summary>Runs the other enabled rules on a candidate spec and tells whether any error-level rule that was clean now fails.</summary>
-    internal Func<TiaSpec, string, bool>? OtherRulesCheck { get; init; }
+    internal Func<TiaSpec, string, IReadOnlyList<string>>? OtherRulesCheck { get; init; }
 
     /// <summary>
     /// True when <paramref name="candidate"/> trips no error-level rule (besides this one) that passes for the
     /// current spec: a fix must not trade one error for another.
     /// </summary>
-    public bool LeavesOtherRulesClean(TiaSpec candidate) => OtherRulesCheck?.Invoke(candidate, _descriptor.Id) ?? true;
+    public bool LeavesOtherRulesClean(TiaSpec candidate) => RulesTrippedBy(candidate).Count == 0;
+
+    /// <summary>
+    /// The ids of the other rules that reject <paramref name="candidate"/>: an error that was not there before, or
+    /// one about the key being changed. Empty when it leaves them clean.
+    /// </summary>
+    public IReadOnlyList<string> RulesTrippedBy(TiaSpec candidate) => OtherRulesCheck?.Invoke(candidate, _descriptor.Id) ?? [];
 
     /// <summary>Analyses a changed spec, the way a rule re-checks a fix before suggesting it.</summary>
     public SpecAnalysis Reanalyze(TiaSpec changed, bool includeNoise = false) =>
@@ -91,7 +97,7 @@ public sealed class RuleContext
         return new Finding(_descriptor.Id, severity ?? _descriptor.DefaultSeverity, Spec.File, pointer, at.Line, at.Column, message, fix);
     }
 
-    private static double OptionSi(RuleDescriptor descriptor, RuleConfiguration configuration, string key, Dimension? wanted = null)
+    internal static double OptionSi(RuleDescriptor descriptor, RuleConfiguration configuration, string key, Dimension? wanted = null)
     {
         var option = descriptor.Options.FirstOrDefault(o => o.Key == key)
             ?? throw new ArgumentException($"rule '{descriptor.Id}' declares no option '{key}'", nameof(key));

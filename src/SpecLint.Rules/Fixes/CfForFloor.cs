@@ -1,4 +1,5 @@
 using SpecLint.Core.Analysis;
+using SpecLint.Core.Spec.Model;
 using SpecLint.Core.Units;
 using SpecLint.Rules.Engine;
 
@@ -30,18 +31,31 @@ public static class CfForFloor
     }
 
     /// <summary>The capacitance itself, or null.</summary>
-    public static Capacitance? Value(RuleContext context, Angle floor, Func<SpecAnalysis, bool>? alsoRequire = null)
+    public static Capacitance? Value(RuleContext context, Angle floor, Func<SpecAnalysis, bool>? alsoRequire = null) =>
+        Search(context, floor, alsoRequire).Value is { } f ? new Capacitance(f) : null;
+
+    /// <summary>
+    /// The search itself: the capacitance, or the rule that rejected the candidate that came closest (the floor
+    /// itself, or another rule's error that the larger Cf brings, such as a bandwidth requirement).
+    /// </summary>
+    public static FixSearchResult Search(RuleContext context, Angle floor, Func<SpecAnalysis, bool>? alsoRequire = null)
     {
         ArgumentNullException.ThrowIfNull(context);
         var start = DesignHelpers.FeedbackCapacitanceForPhaseMargin(context.Circuit, floor) is { } exact ? exact.Farads : context.Circuit.Cf.Farads;
         start = Math.Max(start, SmallestPart(context).Farads);
 
-        var series = StandardValueSearch.SeriesFor(context.Spec.Feedback.Capacitance, ESeries.E12);
-        var found = StandardValueSearch.Find(context, series, start, upward: true, c => SpecEdits.WithCf(context.Spec, new Capacitance(c)), edited =>
+        var analysed = new Dictionary<TiaSpec, SpecAnalysis>(ReferenceEqualityComparer.Instance);
+        SpecAnalysis Of(TiaSpec s) => analysed.TryGetValue(s, out var a) ? a : analysed[s] = context.Reanalyze(s);
+        var conditions = new List<FixCondition>
         {
-            var r = context.Reanalyze(edited);
-            return r.WorstPhaseMarginDeg is { } w && w >= floor.Degrees && (alsoRequire?.Invoke(r) ?? true);
-        }, steps: 24);
-        return found is { } f ? new Capacitance(f) : null;
+            new(BuiltIn.PhaseMarginBelowFloorRule.Info.Id, $"phase margin ≥ {Fmt.Q(floor)}", s => Of(s).WorstPhaseMarginDeg is { } w && w >= floor.Degrees),
+        };
+        if (alsoRequire is not null)
+        {
+            conditions.Add(new("the requirement this fix is for", "the caller's check", s => alsoRequire(Of(s))));
+        }
+
+        var series = StandardValueSearch.SeriesFor(context.Spec.Feedback.Capacitance, ESeries.E12);
+        return StandardValueSearch.Search(context, series, start, upward: true, c => SpecEdits.WithCf(context.Spec, new Capacitance(c)), conditions, steps: 24);
     }
 }

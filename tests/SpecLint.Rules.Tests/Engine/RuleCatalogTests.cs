@@ -9,11 +9,11 @@ public sealed class RuleCatalogTests
     private static readonly string[] ContractIds =
     [
         "bandwidth", "capacitor-tolerance", "feedback-capacitor-size", "high-voltage", "min-stable-gain", "noise-floor",
-        "output-headroom", "peaking", "phase-margin", "slew-rate", "standard-values", "thermal-vs-shot-noise",
+        "output-headroom", "peaking", "phase-margin", "plausible-values", "slew-rate", "standard-values", "thermal-vs-shot-noise",
     ];
 
     [Fact]
-    public void Discovers_the_twelve_built_in_rules_with_the_contract_ids()
+    public void Discovers_the_thirteen_built_in_rules_with_the_contract_ids()
     {
         Assert.Equal(ContractIds, RuleCatalog.BuiltIn.Rules.Select(r => r.Descriptor.Id));
     }
