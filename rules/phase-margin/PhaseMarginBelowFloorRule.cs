@@ -39,15 +39,9 @@ public sealed class PhaseMarginBelowFloorRule : IRule
             yield break;
         }
 
-        var search = CfForFloor.Search(context, floor);
-        var fix = search.Value is { } v ? new FixSuggestion("/feedback/capacitance", SpecEdits.CfText(context.Spec, new Capacitance(v))) : null;
-        var fixText = fix is not null
-            ? $" Use Cf = {fix.Value} (re-checked{(context.Tolerances is null ? "" : " at every corner")})."
-            : search.Closest is { } closest && search.RejectedBy != Info.Id
-                ? $" Cf = {SpecEdits.CfText(context.Spec, new Capacitance(closest))} would restore it, but {search.RejectedBy} rejects it ({search.Requirement}): reduce the input capacitance or Rf, or use an op-amp with more GBW."
-                : " No standard Cf restores it: reduce the input capacitance or Rf, or use an op-amp with more GBW.";
         if (pm.Degrees < floor.Degrees)
         {
+            var (fix, fixText) = Fix(context, floor);
             yield return context.Report(at, string.Create(CultureInfo.InvariantCulture,
                 $"phase margin is {pm.Degrees:0.0}° at nominal, below the {floor.Degrees:0.#}° floor (|T| = 1 at {Fmt.Hz(a.Crossover)}, peaking {a.PeakingDb:0.0} dB); the loop will ring.{fixText}"), fix);
             yield break;
@@ -55,10 +49,24 @@ public sealed class PhaseMarginBelowFloorRule : IRule
 
         if (context.Tolerances is { } t && (t.PhaseMarginMin is null || t.PhaseMarginMin.Value.Degrees < floor.Degrees))
         {
+            var (fix, fixText) = Fix(context, floor);
             var worst = t.PhaseMarginMin is { } m ? string.Create(CultureInfo.InvariantCulture, $"{m.Degrees:0.0}°") : "undefined (|T| never reaches 1)";
             yield return context.Report(at, string.Create(CultureInfo.InvariantCulture,
                 $"phase margin is {pm.Degrees:0.0}° at nominal but {worst} at the corner {t.PhaseMarginMinAt.Describe()}, below the {floor.Degrees:0.#}° floor.{fixText}"), fix);
         }
+    }
+
+    // Searched only once the margin fails: each candidate costs a full corner analysis.
+    private static (FixSuggestion? Fix, string Text) Fix(RuleContext context, Angle floor)
+    {
+        var search = CfForFloor.Search(context, floor);
+        var fix = search.Value is { } v ? new FixSuggestion("/feedback/capacitance", SpecEdits.CfText(context.Spec, new Capacitance(v))) : null;
+        var fixText = fix is not null
+            ? $" Use Cf = {fix.Value} (re-checked{(context.Tolerances is null ? "" : " at every corner")})."
+            : search.Closest is { } closest && search.RejectedBy != Info.Id
+                ? $" Cf = {SpecEdits.CfText(context.Spec, new Capacitance(closest))} would restore it, but {search.RejectedBy} rejects it ({search.Requirement}): reduce the input capacitance or Rf, or use an op-amp with more GBW."
+                : " No standard Cf restores it: reduce the input capacitance or Rf, or use an op-amp with more GBW.";
+        return (fix, fixText);
     }
 
     private static string NeverCrosses(AnalysisResult a) => string.Create(CultureInfo.InvariantCulture,

@@ -33,6 +33,9 @@ internal sealed class RoslynHouseRuleSource : IHouseRuleSource
         _workingDirectory = Directory.GetCurrentDirectory();
     }
 
+    /// <summary>How many times this source started the compiler (a cache hit does not).</summary>
+    public int Compilations { get; private set; }
+
     /// <summary>The folder compiled rules are cached in.</summary>
     public string CacheFolder => _cache.Folder;
 
@@ -62,6 +65,7 @@ internal sealed class RoslynHouseRuleSource : IHouseRuleSource
             if (compiled is null)
             {
                 compiled = HouseRuleCompiler.Compile(files, "SpecLintHouseRules_" + key[..16]);
+                Compilations++;
                 _cache.Store(key, compiled);
             }
 

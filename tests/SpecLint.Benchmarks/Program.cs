@@ -5,7 +5,8 @@ namespace SpecLint.Benchmarks;
 
 /// <summary>
 /// Entry point: <c>dotnet run -c Release --project tests/SpecLint.Benchmarks -- --filter '*'</c> for the
-/// BenchmarkDotNet suites, <c>-- montecarlo [specs] [samples]</c> for the timed tolerance run, or <c>-- houserules [repeats]</c> for
+/// BenchmarkDotNet suites, <c>-- montecarlo [specs] [samples]</c> for the timed tolerance run, <c>-- check [specs] [repeats]</c> for whole checks
+/// in a child process, or <c>-- houserules [repeats]</c> for
 /// the whole-process cost of compiling and of loading cached house rules.
 /// </summary>
 public static class Program
@@ -19,6 +20,14 @@ public static class Program
             MonteCarloBench.Run(
                 args.Length > 1 ? int.Parse(args[1], CultureInfo.InvariantCulture) : 1000,
                 args.Length > 2 ? int.Parse(args[2], CultureInfo.InvariantCulture) : 1000);
+            return;
+        }
+
+        if (args.Length > 0 && args[0] == "check")
+        {
+            CheckBench.Run(
+                args.Length > 1 ? int.Parse(args[1], CultureInfo.InvariantCulture) : 1000,
+                args.Length > 2 ? int.Parse(args[2], CultureInfo.InvariantCulture) : 3);
             return;
         }
 

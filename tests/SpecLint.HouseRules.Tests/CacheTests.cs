@@ -1,9 +1,6 @@
-using SpecLint.HouseRules.Compiling;
-
 namespace SpecLint.HouseRules.Tests;
 
-// The compile counter is process-wide: these tests must not overlap with each other.
-[Collection(nameof(CacheTests))]
+// Each source counts its own compilations, so these tests are independent of other tests compiling in parallel.
 public sealed class CacheTests
 {
     [Fact]
@@ -12,11 +9,13 @@ public sealed class CacheTests
         using var repo = new HouseRuleRepo();
         repo.Write("house-rules/rf-max/RfMaxRule.cs", Sources.RfMaxRule());
 
-        var first = repo.Source().Load(repo.Config);
-        var compiles = HouseRuleCompiler.Invocations;
-        var second = repo.Source().Load(repo.Config);
+        var firstSource = repo.Source();
+        var first = firstSource.Load(repo.Config);
+        var secondSource = repo.Source();
+        var second = secondSource.Load(repo.Config);
 
-        Assert.Equal(compiles, HouseRuleCompiler.Invocations);
+        Assert.Equal(1, firstSource.Compilations);
+        Assert.Equal(0, secondSource.Compilations);
         Assert.Equal(first.Rules.Select(r => r.Descriptor.Id), second.Rules.Select(r => r.Descriptor.Id));
         Assert.Single(second.Rules);
         Assert.NotEmpty(Directory.GetFiles(repo.Cache, "*.dll"));
@@ -29,12 +28,12 @@ public sealed class CacheTests
         using var repo = new HouseRuleRepo();
         repo.Write("house-rules/rf-max/RfMaxRule.cs", Sources.RfMaxRule());
         repo.Source().Load(repo.Config);
-        var compiles = HouseRuleCompiler.Invocations;
 
         repo.Write("house-rules/rf-max/RfMaxRule.cs", Sources.RfMaxRule().Replace("\"100 kΩ\"", "\"2 MΩ\"", StringComparison.Ordinal));
-        var reloaded = repo.Source().Load(repo.Config);
+        var source = repo.Source();
+        var reloaded = source.Load(repo.Config);
 
-        Assert.True(HouseRuleCompiler.Invocations > compiles);
+        Assert.Equal(1, source.Compilations);
         Assert.Equal("2 MΩ", Assert.Single(Assert.Single(reloaded.Rules).Descriptor.Options).Default);
     }
 
@@ -44,11 +43,11 @@ public sealed class CacheTests
         using var repo = new HouseRuleRepo();
         repo.Write("house-rules/probe/ProbeRule.cs", Sources.Rule("probe", "var x = nope;\n        yield break;"));
         var first = repo.Source().Load(repo.Config);
-        var compiles = HouseRuleCompiler.Invocations;
 
-        var second = repo.Source().Load(repo.Config);
+        var source = repo.Source();
+        var second = source.Load(repo.Config);
 
-        Assert.Equal(compiles, HouseRuleCompiler.Invocations);
+        Assert.Equal(0, source.Compilations);
         Assert.Equal(first.Problems.Select(p => p.ToString()), second.Problems.Select(p => p.ToString()));
         Assert.NotEmpty(second.Problems);
     }
@@ -64,10 +63,10 @@ public sealed class CacheTests
             File.WriteAllText(f, "{ not json");
         }
 
-        var compiles = HouseRuleCompiler.Invocations;
-        var reloaded = repo.Source().Load(repo.Config);
+        var source = repo.Source();
+        var reloaded = source.Load(repo.Config);
 
-        Assert.True(HouseRuleCompiler.Invocations > compiles);
+        Assert.Equal(1, source.Compilations);
         Assert.Single(reloaded.Rules);
     }
 

@@ -96,6 +96,128 @@ public static class TiaAnalyzer
     }
 
     /// <summary>
+    /// Phase margin (degrees), bandwidth (Hz) and peaking (dB) of one operating point, as
+    /// <see cref="Analyze(Circuit, AnalysisOptions)"/> without noise finds them, for corners and Monte Carlo.
+    /// </summary>
+    /// <remarks>
+    /// The same scan, crossing search and refinements as the full analysis, so its guarantees hold (no pair of
+    /// crossings hides between scan points), with the work they do not need left out: the scan compares squared
+    /// magnitudes instead of their logarithms (taken only where the slope bound needs them, next to |T| = 1), the
+    /// crossing search stops at the first falling crossing, and there is no DC output, crossing list or noise.
+    /// Logarithms are monotonic, so every decision is the full analysis's except where two values agree to the last
+    /// bit; the figures agree to rounding (the tests compare both paths).
+    /// </remarks>
+    /// <param name="circuit">The operating point.</param>
+    /// <param name="pointsPerDecade">Scan points per decade, as <see cref="AnalysisOptions.ScanPointsPerDecade"/>.</param>
+    internal static (double? PhaseMarginDeg, double? BandwidthHz, double PeakingDb) LoopFigures(Circuit circuit, int pointsPerDecade = 20)
+    {
+        var model = new TiaModel(circuit);
+        var zt0Sq = model.TransimpedanceMagnitudeSquared(0);
+        var zt0 = Math.Sqrt(zt0Sq);
+        var (wLo, wHi) = model.CharacteristicRange();
+        var uLo = Math.Log(wLo / ScanMargin);
+        var uHi = Math.Log(wHi * ScanMargin);
+        // The same points as the full scan, its cap included.
+        var du = Math.Max(Math.Log(10) / pointsPerDecade, (uHi - uLo) / MaxScanPoints);
+        var n = double.IsFinite(du) && du > 0 ? (int)Math.Min(Math.Ceiling((uHi - uLo) / du), MaxScanPoints) : 0;
+
+        // |ln|T|| ≤ 3·du at both ends is what sends an interval without a sign change to the crossing search;
+        // |T|² outside e^(±6·du), widened by a hair against rounding, rules that out without a logarithm.
+        var nearLow = Math.Exp(-6.001 * du);
+        var nearHigh = Math.Exp(6.001 * du);
+        var targetSq = zt0 * zt0 / 2;
+        var peakSq = zt0 * zt0;
+        var logTarget = Math.Log(targetSq);
+
+        double? marginDeg = null;
+        double? bandwidthU = null;
+        var peakIndex = -1;
+
+        var w = Math.Exp(uLo);
+        var prevT2 = model.LoopGainMagnitudeSquared(w);
+        var prevZ2 = model.TransimpedanceMagnitudeSquared(w);
+        for (var i = 1; i <= n; i++)
+        {
+            w = Math.Exp(uLo + (i * du));
+            if (marginDeg is null)
+            {
+                var t2 = model.LoopGainMagnitudeSquared(w);
+                var changes = (prevT2 > 1) != (t2 > 1);
+                if (changes || (prevT2 >= nearLow && prevT2 <= nearHigh && t2 >= nearLow && t2 <= nearHigh))
+                {
+                    var prevT = 0.5 * Math.Log(prevT2);
+                    var t = 0.5 * Math.Log(t2);
+                    if (changes || Math.Abs(prevT) + Math.Abs(t) <= 3 * du)
+                    {
+                        marginDeg = FirstFallingMargin(model, uLo + ((i - 1) * du), prevT, uLo + (i * du), t);
+                    }
+                }
+
+                prevT2 = t2;
+            }
+
+            var z2 = model.TransimpedanceMagnitudeSquared(w);
+            if (bandwidthU is null && prevZ2 > targetSq && z2 <= targetSq)
+            {
+                bandwidthU = Refine(
+                    u => Math.Log(model.TransimpedanceMagnitudeSquared(Math.Exp(u))) - logTarget,
+                    uLo + ((i - 1) * du),
+                    uLo + (i * du));
+            }
+
+            if (z2 > peakSq)
+            {
+                peakSq = z2;
+                peakIndex = i;
+            }
+
+            prevZ2 = z2;
+        }
+
+        double peakingDb = 0;
+        if (peakIndex > 0)
+        {
+            var (_, logPeak) = GoldenMax(
+                u => Math.Log(model.TransimpedanceMagnitudeSquared(Math.Exp(u))),
+                uLo + ((peakIndex - 1) * du),
+                uLo + ((peakIndex + 1) * du));
+            peakingDb = Math.Max(0, (logPeak - Math.Log(zt0 * zt0)) * 10 / Math.Log(10));
+        }
+
+        return (marginDeg, bandwidthU is { } ub ? Math.Exp(ub) / (2 * Math.PI) : null, peakingDb);
+    }
+
+    /// <summary>
+    /// <see cref="FindCrossings"/> reduced to the phase margin at the first falling crossing in [a, b]; null when
+    /// there is none there. Same splitting and refinement, so the same crossing.
+    /// </summary>
+    private static double? FirstFallingMargin(TiaModel model, double a, double ga, double b, double gb)
+    {
+        var (min, max) = model.LogLoopGainSlopeBounds(Math.Exp(a), Math.Exp(b));
+        var changes = (ga > 0) != (gb > 0);
+        var monotonic = min > 0 || max < 0;
+        if (monotonic || b - a < CrossingResolution)
+        {
+            if (changes && gb <= 0)
+            {
+                var wc = Math.Exp(Refine(u => model.LogLoopGainMagnitude(Math.Exp(u)), a, b));
+                return (Angle.FromDegrees(180) + new Angle(model.LoopGainPhaseRadians(wc))).Degrees;
+            }
+
+            return null;
+        }
+
+        if (!changes && ((ga > 0 ? (ga / -min) + (gb / max) : (-ga / max) + (-gb / -min)) > b - a))
+        {
+            return null;
+        }
+
+        var m = (a + b) / 2;
+        var gm = model.LogLoopGainMagnitude(Math.Exp(m));
+        return FirstFallingMargin(model, a, ga, m, gm) ?? FirstFallingMargin(model, m, gm, b, gb);
+    }
+
+    /// <summary>
     /// The exact DC output with finite A0 (references.md §2 notes), for a signal current leaving the node
     /// (<paramref name="outOfNodeAmperes"/>, dark current included) and given offset and bias current.
     /// </summary>

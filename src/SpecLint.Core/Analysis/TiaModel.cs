@@ -217,7 +217,10 @@ public sealed class TiaModel
     }
 
     /// <summary>ln|T(jω)|, with real arithmetic only (the crossing scan's hot path).</summary>
-    internal double LogLoopGainMagnitude(double w)
+    internal double LogLoopGainMagnitude(double w) => 0.5 * Math.Log(LoopGainMagnitudeSquared(w));
+
+    /// <summary>|T(jω)|², with real arithmetic only; half its logarithm is <see cref="LogLoopGainMagnitude"/> to the last bit.</summary>
+    internal double LoopGainMagnitudeSquared(double w)
     {
         var b = w * _invWtSeconds;
         var c = w * _invWp2Seconds;
@@ -227,7 +230,7 @@ public sealed class TiaModel
         var gs = _gfSiemens + _gshSiemens;
         var wcs = w * (_cfbFarads + _cinFarads);
         var ys2 = (gs * gs) + (wcs * wcs);
-        return 0.5 * Math.Log(yf2 / (ys2 * invA2));
+        return yf2 / (ys2 * invA2);
     }
 
     /// <summary>

@@ -32,6 +32,12 @@ internal sealed record CheckOptions
     /// </summary>
     public Func<string, bool>? Select { get; init; }
 
-    /// <summary>Reports progress (file index, count, file) for long runs; null for none.</summary>
+    /// <summary>
+    /// How many specs are checked at once: −1 (the default) for every core, 1 for one after another. The output
+    /// is the same either way.
+    /// </summary>
+    public int MaxDegreeOfParallelism { get; init; } = -1;
+
+    /// <summary>Reports progress (specs done, count, the file just finished) for long runs, one call at a time; null for none.</summary>
     public Action<int, int, string>? Progress { get; init; }
 }

@@ -56,14 +56,41 @@ internal static class CheckRunner
             files = [.. files.Where(select)];
         }
 
-        var outcomes = new List<SpecOutcome>();
+        // Configurations and house rules load here, one after another, before any spec is analysed: loading
+        // compiles house rules and records problems in order. The specs are then independent and run in
+        // parallel, each into its own slot, so the outcome is the same on any number of cores.
+        var jobs = new (string File, RepoConfig Config, CheckOptions Options)[files.Count];
         for (var i = 0; i < files.Count; i++)
         {
-            options.Progress?.Invoke(i + 1, files.Count, files[i]);
             var config = configs.ForSpec(files[i]);
-            outcomes.Add(CheckOne(files[i], config, options with { Catalog = configs.CatalogFor(config) }, tolerances));
+            jobs[i] = (files[i], config, options with { Catalog = configs.CatalogFor(config) });
         }
 
+        var slots = new SpecOutcome[files.Count];
+        var done = 0;
+        var progressGate = new object();
+        try
+        {
+            Parallel.For(0, jobs.Length, new ParallelOptions { MaxDegreeOfParallelism = options.MaxDegreeOfParallelism }, i =>
+            {
+                slots[i] = CheckOne(jobs[i].File, jobs[i].Config, jobs[i].Options, tolerances);
+                if (options.Progress is { } progress)
+                {
+                    lock (progressGate)
+                    {
+                        progress(++done, jobs.Length, jobs[i].File);
+                    }
+                }
+            });
+        }
+        catch (AggregateException e) when (e.InnerExceptions.Count > 0)
+        {
+            // An exception here is a bug (exit code 3); keep its own type and stack for the report.
+            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(e.InnerExceptions[0]).Throw();
+            throw;
+        }
+
+        var outcomes = slots.ToList();
         CheckUniqueNames(outcomes, problems);
         return new CheckRun(
             [.. outcomes],

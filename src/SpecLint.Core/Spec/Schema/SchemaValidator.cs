@@ -17,6 +17,10 @@ internal sealed partial class SchemaValidator
     private readonly JsonSchema _schema;
     private readonly JsonNode _schemaNode;
 
+    // One validation at a time: the schema library's evaluation caches state on the shared schema, and the
+    // parsed schema tree fills itself in on first read; specs checked in parallel share this validator.
+    private readonly Lock _gate = new();
+
     public SchemaValidator(string resourceFile)
     {
         Text = LoadResource(resourceFile);
@@ -39,6 +43,14 @@ internal sealed partial class SchemaValidator
     }
 
     public ImmutableArray<SchemaViolation> Validate(JsonNode? root)
+    {
+        lock (_gate)
+        {
+            return ValidateAlone(root);
+        }
+    }
+
+    private ImmutableArray<SchemaViolation> ValidateAlone(JsonNode? root)
     {
         using var doc = JsonDocument.Parse(root?.ToJsonString() ?? "null");
         var results = _schema.Evaluate(doc.RootElement, new EvaluationOptions { OutputFormat = OutputFormat.List });
