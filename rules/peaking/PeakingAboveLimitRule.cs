@@ -34,25 +34,32 @@ public sealed class PeakingAboveLimitRule : IRule
         var where = nominal > limitDb
             ? string.Create(CultureInfo.InvariantCulture, $"{nominal:0.0} dB at nominal (at {Fmt.Hz(context.Analysis.PeakFrequency)})")
             : string.Create(CultureInfo.InvariantCulture, $"{nominal:0.0} dB at nominal but {worst:0.0} dB at {context.Tolerances!.PeakingMaxAt.Describe()}");
-        var fix = SmallestCfWithin(context, limitDb);
+        var search = SearchCf(context, limitDb);
+        Capacitance? fix = search.Value is { } found ? new Capacitance(found) : null;
         var advice = fix is { } c
             ? $" Cf = {SpecEdits.CfText(context.Spec, c)} keeps it within the limit (re-checked)."
-            : " No standard Cf brings it within the limit.";
+            : search is { Closest: { } closest, RejectedBy: { } by } && by != Info.Id
+                ? $" Cf = {SpecEdits.CfText(context.Spec, new Capacitance(closest))} would keep it within the limit, but {by} rejects it ({search.Requirement})."
+                : " No standard Cf brings it within the limit.";
         yield return context.Report(context.Spec.Feedback.Capacitance is null ? "/feedback" : "/feedback/capacitance",
             string.Create(CultureInfo.InvariantCulture, $"the transimpedance peaks {where}, above the {limitDb:0.#} dB limit: steps overshoot and noise near the peak is amplified.") + advice,
             fix is { } v ? new FixSuggestion("/feedback/capacitance", SpecEdits.CfText(context.Spec, v)) : null);
     }
 
-    private static Capacitance? SmallestCfWithin(RuleContext context, double limitDb)
+    // Walks up from the current Cf (never below a real part); a failed search names the rule that stopped the
+    // candidate that came closest, so the message can say what stands in the way.
+    private static FixSearchResult SearchCf(RuleContext context, double limitDb)
     {
         var start = Math.Max(context.Circuit.Cf.Farads, CfForFloor.SmallestPart(context).Farads);
         var series = StandardValueSearch.SeriesFor(context.Spec.Feedback.Capacitance, ESeries.E12);
-        var found = StandardValueSearch.Find(context, series, start, upward: true, c => SpecEdits.WithCf(context.Spec, new Capacitance(c)), edited =>
-        {
-            var r = context.Reanalyze(edited);
-            var peak = Math.Max(r.Analysis.PeakingDb, r.Tolerances?.PeakingDbMax ?? double.NegativeInfinity);
-            return peak <= limitDb;
-        }, steps: 24);
-        return found is { } f ? new Capacitance(f) : null;
+        FixCondition[] conditions =
+        [
+            new(Info.Id, string.Create(CultureInfo.InvariantCulture, $"peaking ≤ {limitDb:0.#} dB"), edited =>
+            {
+                var r = context.Reanalyze(edited);
+                return Math.Max(r.Analysis.PeakingDb, r.Tolerances?.PeakingDbMax ?? double.NegativeInfinity) <= limitDb;
+            }),
+        ];
+        return StandardValueSearch.Search(context, series, start, upward: true, c => SpecEdits.WithCf(context.Spec, new Capacitance(c)), conditions, steps: 24);
     }
 }

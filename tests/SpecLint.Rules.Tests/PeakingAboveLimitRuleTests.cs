@@ -37,6 +37,17 @@ public sealed class PeakingAboveLimitRuleTests
         Assert.Contains("1.2 dB", f.Message, StringComparison.Ordinal);
     }
 
+    [Fact]
+    public void Names_the_rule_that_rejects_the_capacitor_that_would_remove_the_peak()
+    {
+        // references.md §3.2 worked example. On the exact model 1.2616 pF gives 159 kHz and 1.21 dB; 1.5 pF, the
+        // next E12 value up, gives 0.38 dB but 144 kHz, below a 150 kHz requirement that 1.2616 pF meets.
+        var f = Lint.Check(WorkedExample("1.2616 pF", "requirements: { bandwidth: 150 kHz }")).Of(Id).Single();
+
+        Assert.Null(f.Fix);
+        Assert.Contains("Cf = 1.5 pF would keep it within the limit, but bandwidth rejects it", f.Message, StringComparison.Ordinal);
+    }
+
     [Theory]
     [InlineData("1.3 dB", false)]
     [InlineData("1.1 dB", true)]
