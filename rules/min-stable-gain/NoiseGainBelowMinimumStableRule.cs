@@ -44,10 +44,14 @@ public sealed class NoiseGainBelowMinimumStableRule : IRule
         }
 
         var floor = PhaseMarginBelowFloorRule.FloorFor(context);
-        var fix = LargestCfReaching(context, gmin.Linear, floor);
+        var search = SearchCf(context, gmin.Linear, floor);
+        Capacitance? fix = search.Value is { } found ? new Capacitance(found) : null;
+        const string Otherwise = "add capacitance at the inverting input to raise the noise gain, or use a unity-gain-stable op-amp.";
         var advice = fix is { } c
             ? string.Create(CultureInfo.InvariantCulture, $" Cf = {SpecEdits.CfText(spec, c)} reaches it with the {floor.Degrees:0.#}° phase-margin floor kept (re-checked).")
-            : string.Create(CultureInfo.InvariantCulture, $" No standard Cf reaches it and keeps the {floor.Degrees:0.#}° phase-margin floor: add capacitance at the inverting input to raise the noise gain, or use a unity-gain-stable op-amp.");
+            : search is { Closest: { } closest, RejectedBy: { } by } && by != Info.Id
+                ? string.Create(CultureInfo.InvariantCulture, $" Cf = {SpecEdits.CfText(spec, new Capacitance(closest))} would reach it, but {by} rejects it ({search.Requirement}); otherwise {Otherwise}")
+                : string.Create(CultureInfo.InvariantCulture, $" No standard Cf reaches it and keeps the {floor.Degrees:0.#}° phase-margin floor: {Otherwise}");
         var where = nominal < gmin.Linear
             ? string.Create(CultureInfo.InvariantCulture, $"{nominal:0.##}")
             : string.Create(CultureInfo.InvariantCulture, $"{nominal:0.##} at nominal and {worst:0.##} with the smallest Cin and largest Cf");
@@ -56,27 +60,20 @@ public sealed class NoiseGainBelowMinimumStableRule : IRule
             fix is { } v ? new FixSuggestion("/feedback/capacitance", SpecEdits.CfText(spec, v)) : null);
     }
 
-    private static Capacitance? LargestCfReaching(RuleContext context, double gmin, Angle floor)
+    // Walks down from the Cf that gives exactly the minimum stable gain; a failed search names the rule that
+    // stopped the candidate that came closest.
+    private static FixSearchResult SearchCf(RuleContext context, double gmin, Angle floor)
     {
         var spec = context.Spec;
         var c = context.Circuit;
         var start = (c.Cin.Farads / (gmin - 1)) - c.Cpar.Farads;
-        if (!(start > 0))
-        {
-            return null;
-        }
-
         var series = StandardValueSearch.SeriesFor(spec.Feedback.Capacitance, ESeries.E12);
-        var found = StandardValueSearch.Find(context, series, start, upward: false, c => SpecEdits.WithCf(spec, new Capacitance(c)), edited =>
-        {
-            if (WorstNoiseGain(edited) < gmin)
-            {
-                return false;
-            }
-
-            var r = context.Reanalyze(edited);
-            return r.WorstPhaseMarginDeg is { } pm && pm >= floor.Degrees;
-        }, steps: 6);
-        return found is { } f ? new Capacitance(f) : null;
+        FixCondition[] conditions =
+        [
+            new(Info.Id, string.Create(CultureInfo.InvariantCulture, $"noise gain ≥ {gmin:0.##}"), edited => WorstNoiseGain(edited) >= gmin),
+            new(PhaseMarginBelowFloorRule.Info.Id, string.Create(CultureInfo.InvariantCulture, $"phase margin ≥ {floor.Degrees:0.#}°"),
+                edited => context.Reanalyze(edited).WorstPhaseMarginDeg is { } pm && pm >= floor.Degrees),
+        ];
+        return StandardValueSearch.Search(context, series, start, upward: false, cf => SpecEdits.WithCf(spec, new Capacitance(cf)), conditions, steps: 6);
     }
 }

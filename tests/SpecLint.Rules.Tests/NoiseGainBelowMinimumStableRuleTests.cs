@@ -104,4 +104,15 @@ public sealed class NoiseGainBelowMinimumStableRuleTests
         Assert.Null(f.Fix);
         Assert.Contains("No standard Cf reaches it", f.Message, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void Names_the_rule_that_rejects_the_capacitor_that_would_reach_the_minimum()
+    {
+        // Cf ≤ Cin/(Gmin − 1) = 2.5 pF reaches the minimum (references.md §3.4); on the exact model 2.2 pF leaves
+        // 73.3° of phase margin and 2.7 pF 78.2°, so a 75° floor rejects every value that would reach it.
+        var f = Lint.Check(Channel("2.7 pF"), "rules:\n  phase-margin: { floor: 75 deg }").Single(Id);
+
+        Assert.Null(f.Fix);
+        Assert.Contains("Cf = 2.2 pF would reach it, but phase-margin rejects it (phase margin ≥ 75°)", f.Message, StringComparison.Ordinal);
+    }
 }
