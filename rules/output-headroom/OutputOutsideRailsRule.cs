@@ -57,25 +57,33 @@ public sealed class OutputOutsideRailsRule : IRule
             problems.Add($"the output goes down to {Fmt.Q(o.Min)}, below the {Fmt.Q(span.Low)} limit (negative rail {Fmt.Q(spec.Conditions.SupplyNegative.Max)}, plus {Fmt.Q(spec.Amplifier.SwingToNegative)} swing limit and {Fmt.Q(context.OptionOf<Voltage>(Info, Margin.Key))} margin)");
         }
 
-        var rf = LargestFittingRf(context, span);
+        var search = SearchRf(context, span);
+        Resistance? rf = search.Value is { } found ? new Resistance(found) : null;
         var detail = string.Create(CultureInfo.InvariantCulture,
             $" Range: {Fmt.Q(o.Min)} .. {Fmt.Q(o.Max)} from zero signal to full scale {Fmt.Q(spec.Input.CurrentMax)}, including ±{Fmt.Q(o.ErrorBand)} of offset and bias-current error.");
         var advice = rf is { } r
             ? $" Use Rf = {SpecEdits.RfText(spec, r)}, the largest standard value that fits (re-checked)."
-            : " No standard Rf fits: move the bias voltage, widen the supply or reduce the full-scale current.";
+            : search is { Closest: { } closest, RejectedBy: { } by } && by != Info.Id
+                ? $" Rf = {SpecEdits.RfText(spec, new Resistance(closest))} would fit, but {by} rejects it ({search.Requirement}); otherwise move the bias voltage, widen the supply or reduce the full-scale current."
+                : " No standard Rf fits: move the bias voltage, widen the supply or reduce the full-scale current.";
         yield return context.Report("/feedback/resistance",
             "the output clips: " + string.Join("; ", problems) + "." + detail + advice,
             rf is { } v ? new FixSuggestion("/feedback/resistance", SpecEdits.RfText(spec, v)) : null);
     }
 
-    private static Resistance? LargestFittingRf(RuleContext context, (Voltage Low, Voltage High) span)
+    // Walks down from the largest Rf that fits by the closed form; a failed search names the rule that stopped
+    // the candidate that came closest.
+    private static FixSearchResult SearchRf(RuleContext context, (Voltage Low, Voltage High) span)
     {
         var spec = context.Spec;
         var series = StandardValueSearch.SeriesFor<Resistance>(spec.Feedback.Resistance, ESeries.E96);
         var worstRails = context.Circuit with { SupplyPositive = spec.Conditions.SupplyPositive.Min, SupplyNegative = spec.Conditions.SupplyNegative.Max };
         var start = DesignHelpers.LargestRfForHeadroom(worstRails, context.OptionOf<Voltage>(Info, Margin.Key)) is { } r && double.IsFinite(r.Ohms) ? r.Ohms : spec.Feedback.Resistance.Typ.Ohms;
-        var found = StandardValueSearch.Find(context, series, Math.Min(start, spec.Feedback.Resistance.Typ.Ohms), upward: false,
-            c => SpecEdits.WithRf(spec, new Resistance(c)), edited => Fits(context.Reanalyze(edited).Analysis.Output, span), steps: 24);
-        return found is { } f ? new Resistance(f) : null;
+        FixCondition[] conditions =
+        [
+            new(Info.Id, $"output inside {Fmt.Q(span.Low)} .. {Fmt.Q(span.High)}", edited => Fits(context.Reanalyze(edited).Analysis.Output, span)),
+        ];
+        return StandardValueSearch.Search(context, series, Math.Min(start, spec.Feedback.Resistance.Typ.Ohms), upward: false,
+            c => SpecEdits.WithRf(spec, new Resistance(c)), conditions, steps: 24);
     }
 }

@@ -37,8 +37,13 @@ public sealed class RfThermalNoiseDominatesRule : IRule
         var needed = DesignHelpers.SmallestShotLimitedRf(spec.Input.CurrentMin, hottest).Ohms * minRatio;
         var span = OutputOutsideRailsRule.UsableSpan(context);
         var series = StandardValueSearch.SeriesFor<Resistance>(spec.Feedback.Resistance, ESeries.E96);
-        var found = StandardValueSearch.Find(context, series, needed, upward: true,
-            c => SpecEdits.WithRf(spec, new Resistance(c)), edited => OutputOutsideRailsRule.Fits(context.Reanalyze(edited).Analysis.Output, span), steps: 1);
+        FixCondition[] conditions =
+        [
+            new(OutputOutsideRailsRule.Info.Id, $"output inside {Fmt.Q(span.Low)} .. {Fmt.Q(span.High)}",
+                edited => OutputOutsideRailsRule.Fits(context.Reanalyze(edited).Analysis.Output, span)),
+        ];
+        var search = StandardValueSearch.Search(context, series, needed, upward: true, c => SpecEdits.WithRf(spec, new Resistance(c)), conditions, steps: 1);
+        var found = search.Value;
         var message = string.Create(CultureInfo.InvariantCulture,
             $"Imin·Rf = {Fmt.Q(new Voltage(spec.Input.CurrentMin.Amperes * spec.Feedback.Resistance.Typ.Ohms))} is {Fmt.Ratio(ratio)}× 2kT/q ({Fmt.Q(twoKtq)} at {hottest.Celsius:0.#} °C): Rf's thermal noise is {Fmt.Ratio(1 / ratio)}× the shot noise of the {Fmt.Q(spec.Input.CurrentMin)} minimum signal in power, so the resistor, not the signal, sets the noise floor.");
         if (found is { } rf)
@@ -47,6 +52,11 @@ public sealed class RfThermalNoiseDominatesRule : IRule
             yield return context.Report("/feedback/resistance",
                 message + $" Rf ≥ {Fmt.Q(new Resistance(needed))} fixes it; {SpecEdits.RfText(spec, r)} is the smallest standard value that does and still fits the output headroom (re-checked). Re-check Cf for the bandwidth.",
                 new FixSuggestion("/feedback/resistance", SpecEdits.RfText(spec, r)));
+        }
+        else if (search is { Closest: { } closest, RejectedBy: { } by } && by != OutputOutsideRailsRule.Info.Id)
+        {
+            yield return context.Report("/feedback/resistance",
+                message + $" Rf ≥ {Fmt.Q(new Resistance(needed))} fixes it and {SpecEdits.RfText(spec, new Resistance(closest))} fits the output headroom, but {by} rejects it ({search.Requirement}). Otherwise accept the noise and waive this rule.");
         }
         else
         {

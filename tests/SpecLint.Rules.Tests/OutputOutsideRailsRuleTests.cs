@@ -147,4 +147,37 @@ public sealed class OutputOutsideRailsRuleTests
         Assert.Null(f.Fix);
         Assert.Contains("No standard Rf fits", f.Message, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void Names_the_rule_that_rejects_the_resistor_that_would_fit()
+    {
+        // With Cf fixed, a smaller Rf moves the feedback zero up and the phase margin down (references.md §3.2
+        // worked example's circuit, 10 µA full scale on ±5 V rails): on the exact model 1 MΩ leaves 72.6° and
+        // 487 kΩ, the largest E96 value that fits, leaves less than a 65° floor.
+        const string Spec = """
+            spec: 1
+            kind: transimpedance
+            name: channel
+            conditions: { temperature: 25 °C, supply: { positive: 5 V, negative: -5 V } }
+            bias: 0 V
+            input: { type: photodiode, capacitance: 100 pF, current: { min: 1 µA, max: 10 µA } }
+            amplifier:
+              gbw: 10 MHz
+              open-loop-gain: 180 dB
+              voltage-noise: 10 nV/√Hz
+              current-noise: 1 fA/√Hz
+              input-capacitance: { common-mode: 0 pF, differential: 0 pF }
+              bias-current: 0 A
+              offset-voltage: 0 V
+              output-swing: { to-negative: 0 V, to-positive: 0 V }
+            feedback:
+              resistance: 1 MΩ
+              capacitance: 2.2 pF
+            """;
+
+        var f = Lint.Check(Spec, "rules:\n  phase-margin: { floor: 65 deg }").Single(Id);
+
+        Assert.Null(f.Fix);
+        Assert.True(f.Message.Contains("Rf = 487 kΩ would fit, but phase-margin rejects it", StringComparison.Ordinal), f.Message);
+    }
 }
