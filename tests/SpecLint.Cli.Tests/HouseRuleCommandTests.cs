@@ -103,7 +103,7 @@ public sealed class HouseRuleCommandTests
     public void The_example_teams_house_rules_pass_their_cases()
     {
         using var cli = new CliHarness();
-        var examples = Path.Combine(RepoRoot(), "examples");
+        var examples = Path.Combine(RepoPaths.Root, "examples");
 
         var (exit, output, error) = cli.Run("test-rules", "--config", Path.Combine(examples, ".speclint.yaml"));
 
@@ -125,16 +125,5 @@ public sealed class HouseRuleCommandTests
         Assert.Contains("warning build-spread:", output, StringComparison.Ordinal);
         Assert.True(File.Exists(cli.Path_("d/house-rules/build-spread/BuildSpreadTooWideRule.cs")));
         Assert.Contains("`build-spread`", File.ReadAllText(cli.Path_("d/report.md")), StringComparison.Ordinal);
-    }
-
-    private static string RepoRoot()
-    {
-        var dir = new DirectoryInfo(AppContext.BaseDirectory);
-        while (dir is not null && !File.Exists(Path.Combine(dir.FullName, "SpecLint.sln")))
-        {
-            dir = dir.Parent;
-        }
-
-        return dir!.FullName;
     }
 }

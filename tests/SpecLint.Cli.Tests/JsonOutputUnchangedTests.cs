@@ -19,7 +19,7 @@ public sealed class JsonOutputUnchangedTests
     public void The_examples_check_as_committed()
     {
         using var cli = new CliHarness();
-        CopyTree(Path.Combine(RepoRoot(), "examples"), cli.Root);
+        CopyTree(Path.Combine(RepoPaths.Root, "examples"), cli.Root);
 
         var (_, output, error) = cli.Run("check", ".", "--format", "json");
 
@@ -51,7 +51,7 @@ public sealed class JsonOutputUnchangedTests
 
     private static void AssertSame(string name, string actual, string error)
     {
-        var expectedPath = Path.Combine(RepoRoot(), "tests", "SpecLint.Cli.Tests", "Expected", name);
+        var expectedPath = Path.Combine(RepoPaths.Root, "tests", "SpecLint.Cli.Tests", "Expected", name);
         var differences = Differences(File.ReadAllText(expectedPath), actual);
         if (differences.Count > 0)
         {
@@ -135,16 +135,5 @@ public sealed class JsonOutputUnchangedTests
             Directory.CreateDirectory(Path.GetDirectoryName(target)!);
             File.Copy(file, target);
         }
-    }
-
-    private static string RepoRoot()
-    {
-        var dir = new DirectoryInfo(AppContext.BaseDirectory);
-        while (dir is not null && !File.Exists(Path.Combine(dir.FullName, "SpecLint.sln")))
-        {
-            dir = dir.Parent;
-        }
-
-        return dir!.FullName;
     }
 }

@@ -22,7 +22,7 @@ public sealed class ParallelCheckTests
             }
         }
 
-        var examples = Path.Combine(RepoRoot(), "examples");
+        var examples = Path.Combine(RepoPaths.Root, "examples");
         foreach (var file in Directory.EnumerateFiles(examples, "*", SearchOption.AllDirectories))
         {
             cli.Write(Path.Combine("x", Path.GetRelativePath(examples, file)), File.ReadAllText(file));
@@ -61,16 +61,5 @@ public sealed class ParallelCheckTests
         }
 
         return sb.ToString();
-    }
-
-    private static string RepoRoot()
-    {
-        var dir = new DirectoryInfo(AppContext.BaseDirectory);
-        while (dir is not null && !File.Exists(Path.Combine(dir.FullName, "SpecLint.sln")))
-        {
-            dir = dir.Parent;
-        }
-
-        return dir!.FullName;
     }
 }

@@ -12,7 +12,7 @@ public sealed class PublicApiSufficiencyTests
     [Fact]
     public void The_built_in_rules_compile_as_house_rules_against_the_public_api()
     {
-        var root = RepoRoot();
+        var root = RepoPaths.Root;
         var files = Sources(root, "rules");
 
         var compiled = HouseRuleCompiler.Compile(files, "BuiltInAsHouseRules");
@@ -25,7 +25,7 @@ public sealed class PublicApiSufficiencyTests
     [Fact]
     public void The_example_teams_rules_compile_without_a_diagnostic()
     {
-        var files = Sources(RepoRoot(), "examples/house-rules");
+        var files = Sources(RepoPaths.Root, "examples/house-rules");
 
         var compiled = HouseRuleCompiler.Compile(files, "ExampleHouseRules");
 
@@ -58,15 +58,4 @@ public sealed class PublicApiSufficiencyTests
             .Order(StringComparer.Ordinal)
             .Select(f => new SourceFile(Path.GetRelativePath(root, f).Replace('\\', '/'), f, File.ReadAllText(f)))
             .ToList();
-
-    private static string RepoRoot()
-    {
-        var dir = new DirectoryInfo(AppContext.BaseDirectory);
-        while (dir is not null && !File.Exists(Path.Combine(dir.FullName, "SpecLint.sln")))
-        {
-            dir = dir.Parent;
-        }
-
-        return dir!.FullName;
-    }
 }

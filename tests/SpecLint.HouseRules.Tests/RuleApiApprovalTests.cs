@@ -17,7 +17,7 @@ public sealed class RuleApiApprovalTests
     {
         var assembly = Assembly.Load(assemblyName);
         var api = assembly.GeneratePublicApi(new ApiGeneratorOptions { IncludeAssemblyAttributes = false }).ReplaceLineEndings("\n");
-        var folder = Path.Combine(RepoRoot(), "tests", "SpecLint.HouseRules.Tests", "Approved");
+        var folder = Path.Combine(RepoPaths.Root, "tests", "SpecLint.HouseRules.Tests", "Approved");
         var approvedPath = Path.Combine(folder, assemblyName + ".approved.txt");
         var receivedPath = Path.Combine(folder, assemblyName + ".received.txt");
         var approved = File.Exists(approvedPath) ? File.ReadAllText(approvedPath).ReplaceLineEndings("\n") : "";
@@ -29,16 +29,5 @@ public sealed class RuleApiApprovalTests
         }
 
         File.Delete(receivedPath);
-    }
-
-    private static string RepoRoot()
-    {
-        var dir = new DirectoryInfo(AppContext.BaseDirectory);
-        while (dir is not null && !File.Exists(Path.Combine(dir.FullName, "SpecLint.sln")))
-        {
-            dir = dir.Parent;
-        }
-
-        return dir?.FullName ?? throw new InvalidOperationException("SpecLint.sln not found");
     }
 }

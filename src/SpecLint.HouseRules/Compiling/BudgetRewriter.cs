@@ -124,9 +124,7 @@ internal sealed class BudgetRewriter(SemanticModel model) : CSharpSyntaxRewriter
             return v;
         }
 
-        var getter = SyntaxFactory.AccessorDeclaration(SyntaxKind.GetAccessorDeclaration).WithBody(BlockFor(e, false, default));
-        return v.WithExpressionBody(null).WithSemicolonToken(default)
-            .WithAccessorList(SyntaxFactory.AccessorList(SyntaxFactory.SingletonList(getter)).WithTrailingTrivia(v.SemicolonToken.TrailingTrivia));
+        return v.WithExpressionBody(null).WithSemicolonToken(default).WithAccessorList(Getter(e, v.SemicolonToken));
     }
 
     public override SyntaxNode? VisitIndexerDeclaration(IndexerDeclarationSyntax node)
@@ -137,9 +135,7 @@ internal sealed class BudgetRewriter(SemanticModel model) : CSharpSyntaxRewriter
             return v;
         }
 
-        var getter = SyntaxFactory.AccessorDeclaration(SyntaxKind.GetAccessorDeclaration).WithBody(BlockFor(e, false, default));
-        return v.WithExpressionBody(null).WithSemicolonToken(default)
-            .WithAccessorList(SyntaxFactory.AccessorList(SyntaxFactory.SingletonList(getter)).WithTrailingTrivia(v.SemicolonToken.TrailingTrivia));
+        return v.WithExpressionBody(null).WithSemicolonToken(default).WithAccessorList(Getter(e, v.SemicolonToken));
     }
 
     public override SyntaxNode? VisitSimpleLambdaExpression(SimpleLambdaExpressionSyntax node)
@@ -178,28 +174,29 @@ internal sealed class BudgetRewriter(SemanticModel model) : CSharpSyntaxRewriter
         return SyntaxFactory.Block(open, SyntaxFactory.List([Tick(), statement.WithLeadingTrivia().WithTrailingTrivia()]), close);
     }
 
-    // `=> expr;` becomes `{ Tick(); return expr; }` (or `{ Tick(); expr; }`) on the same line.
-    private static BlockSyntax BlockFor(ArrowExpressionClauseSyntax arrow, bool returnsVoid, SyntaxToken semicolon)
+    // `=> expr;` becomes `{ Tick(); return expr; }` (or `{ Tick(); expr; }`) on the same line; the expression
+    // keeps its leading trivia, so a body that starts on the next line stays there.
+    private static BlockSyntax BlockFor(ArrowExpressionClauseSyntax arrow, bool returnsVoid, SyntaxToken semicolon) =>
+        Body(arrow.GetLeadingTrivia(), arrow.Expression.WithoutTrailingTrivia(), returnsVoid,
+            semicolon == default ? arrow.GetTrailingTrivia() : semicolon.TrailingTrivia);
+
+    // A lambda's expression body `x => expr` becomes `x => { Tick(); return expr; }`.
+    private static BlockSyntax LambdaBlock(ExpressionSyntax expr, bool returnsVoid) =>
+        Body(expr.GetLeadingTrivia(), expr.WithoutTrivia(), returnsVoid, expr.GetTrailingTrivia());
+
+    private static BlockSyntax Body(SyntaxTriviaList leading, ExpressionSyntax expr, bool returnsVoid, SyntaxTriviaList trailing)
     {
-        // The expression keeps its leading trivia, so a body that starts on the next line stays there.
-        var expr = arrow.Expression.WithoutTrailingTrivia();
         StatementSyntax body = returnsVoid
             ? SyntaxFactory.ExpressionStatement(expr)
             : SyntaxFactory.ReturnStatement(SyntaxFactory.Token(SyntaxKind.ReturnKeyword).WithTrailingTrivia(SyntaxFactory.Space), expr, SyntaxFactory.Token(SyntaxKind.SemicolonToken));
-        var open = SyntaxFactory.Token(arrow.GetLeadingTrivia(), SyntaxKind.OpenBraceToken, SyntaxFactory.TriviaList(SyntaxFactory.Space));
-        var close = SyntaxFactory.Token(SyntaxFactory.TriviaList(SyntaxFactory.Space), SyntaxKind.CloseBraceToken, semicolon == default ? arrow.GetTrailingTrivia() : semicolon.TrailingTrivia);
-        return SyntaxFactory.Block(open, SyntaxFactory.List([Tick(), body.WithTrailingTrivia(SyntaxFactory.Space)]), close);
-    }
-
-    private static BlockSyntax LambdaBlock(ExpressionSyntax expr, bool returnsVoid)
-    {
-        var trailing = expr.GetTrailingTrivia();
-        var e = expr.WithoutTrivia();
-        StatementSyntax body = returnsVoid
-            ? SyntaxFactory.ExpressionStatement(e)
-            : SyntaxFactory.ReturnStatement(SyntaxFactory.Token(SyntaxKind.ReturnKeyword).WithTrailingTrivia(SyntaxFactory.Space), e, SyntaxFactory.Token(SyntaxKind.SemicolonToken));
-        var open = SyntaxFactory.Token(expr.GetLeadingTrivia(), SyntaxKind.OpenBraceToken, SyntaxFactory.TriviaList(SyntaxFactory.Space));
+        var open = SyntaxFactory.Token(leading, SyntaxKind.OpenBraceToken, SyntaxFactory.TriviaList(SyntaxFactory.Space));
         var close = SyntaxFactory.Token(SyntaxFactory.TriviaList(SyntaxFactory.Space), SyntaxKind.CloseBraceToken, trailing);
         return SyntaxFactory.Block(open, SyntaxFactory.List([Tick(), body.WithTrailingTrivia(SyntaxFactory.Space)]), close);
     }
+
+    // An expression-bodied property or indexer `=> expr;` becomes `{ get { Tick(); return expr; } }`.
+    private static AccessorListSyntax Getter(ArrowExpressionClauseSyntax arrow, SyntaxToken semicolon) =>
+        SyntaxFactory.AccessorList(SyntaxFactory.SingletonList(
+                SyntaxFactory.AccessorDeclaration(SyntaxKind.GetAccessorDeclaration).WithBody(BlockFor(arrow, false, default))))
+            .WithTrailingTrivia(semicolon.TrailingTrivia);
 }

@@ -27,11 +27,6 @@ internal static class HouseRuleCompiler
 
     private const string ImplicitUsingsFile = "<speclint-implicit-usings>.cs";
 
-    private static int s_invocations;
-
-    /// <summary>How many times the compiler ran in this process (the cache tests read it).</summary>
-    public static int Invocations => Volatile.Read(ref s_invocations);
-
     /// <summary>Analyzers run over house rules besides the allow-list: the units analyzer, whose diagnostics become warnings at the .cs line.</summary>
     public static ImmutableArray<DiagnosticAnalyzer> ExtraAnalyzers { get; } = SpecLint.Analyzers.UnitAnalyzers.All;
 
@@ -46,7 +41,6 @@ internal static class HouseRuleCompiler
     public static CompiledRules Compile(IReadOnlyList<SourceFile> files, string assemblyName)
     {
         ArgumentNullException.ThrowIfNull(files);
-        Interlocked.Increment(ref s_invocations);
         var trees = files.Select(f => CSharpSyntaxTree.ParseText(SourceText.From(f.Text, Encoding.UTF8), ParseOptions, f.RelativePath)).ToList();
         var usings = CSharpSyntaxTree.ParseText(SourceText.From(ImplicitUsings, Encoding.UTF8), ParseOptions, ImplicitUsingsFile);
         var options = new CSharpCompilationOptions(
