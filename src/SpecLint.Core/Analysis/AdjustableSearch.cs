@@ -5,7 +5,7 @@ using SpecLint.Core.Units;
 namespace SpecLint.Core.Analysis;
 
 /// <summary>
-/// Where an adjustable Rf is worst (references.md §D7): both ends of the range, and, when they lie inside it, the
+/// Where an adjustable Rf is worst (references.md §D8): both ends of the range, and, when they lie inside it, the
 /// setting with the lowest phase margin, the one with the most peaking and the one with the least bandwidth. The worst
 /// loop figure can sit inside the range (a fixed Cf is right for one Rf only), so the ends alone are not enough:
 /// every position of a digital potentiometer is tried, and a continuous one on a fine logarithmic grid refined by

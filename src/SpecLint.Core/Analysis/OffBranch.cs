@@ -4,7 +4,7 @@ namespace SpecLint.Core.Analysis;
 
 /// <summary>
 /// One unselected branch of a switched feedback network: its resistor and the capacitance across it, reaching the
-/// summing node through the open switch's off-capacitance (references.md §D7).
+/// summing node through the open switch's off-capacitance (references.md §D8).
 /// </summary>
 /// <param name="Rf">The branch's feedback resistor.</param>
 /// <param name="Capacitance">Its Cf plus the parasitic capacitance across it.</param>

@@ -4,7 +4,7 @@ namespace SpecLint.Core.Analysis;
 
 /// <summary>
 /// A sum of <see cref="RcBranch"/>es in parallel: an RC driving-point admittance. Its poles are the branches' poles;
-/// its zeros are found from the RC property (references.md §D7): on the negative real axis Y(−σ) falls strictly
+/// its zeros are found from the RC property (references.md §D8): on the negative real axis Y(−σ) falls strictly
 /// between consecutive poles, from +∞ after one to −∞ before the next, so each gap holds exactly one zero, as does
 /// [0, first pole) (at 0 when Y(0) = 0) and, when Y grows like s, the part above the last pole.
 /// </summary>

@@ -5,7 +5,7 @@ namespace SpecLint.Core.Analysis;
 /// <summary>
 /// One two-terminal RC branch, in SI: a conductance G in parallel with a capacitance C, optionally in series with
 /// a resistance R or a capacitance C0 (never both). Every element of a TIA's feedback and input networks is one of
-/// these shapes, and a sum of them is an RC driving-point admittance (references.md §D7): its poles and zeros lie on
+/// these shapes, and a sum of them is an RC driving-point admittance (references.md §D8): its poles and zeros lie on
 /// the negative real axis and alternate, which is what <see cref="RcAdmittance"/> relies on.
 /// </summary>
 internal readonly record struct RcBranch(double G, double C, double SeriesR, double SeriesC)

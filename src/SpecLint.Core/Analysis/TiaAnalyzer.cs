@@ -244,7 +244,7 @@ public static class TiaAnalyzer
     }
 
     /// <summary>
-    /// The sensor branch's DC conductance at the node: 1/(Rsh + Rs), zero when Rsh is infinite (references.md §D7).
+    /// The sensor branch's DC conductance at the node: 1/(Rsh + Rs), zero when Rsh is infinite (references.md §D8).
     /// </summary>
     internal static double DcShuntConductance(Circuit c) =>
         c.Rsh is { } rsh ? 1 / (rsh.Ohms + c.SeriesResistance.Ohms) : 0;

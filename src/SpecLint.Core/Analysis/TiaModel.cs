@@ -296,7 +296,7 @@ public sealed class TiaModel
 
         if (_network is { } n)
         {
-            // T = A·Nf·Di/Ns: rising terms are Yf's zeros and Yin's poles, falling ones Ysum's zeros (references.md §D7).
+            // T = A·Nf·Di/Ns: rising terms are Yf's zeros and Yin's poles, falling ones Ysum's zeros (references.md §D8).
             return (
                 n.RisingSlope(wLo) - n.FallingSlope(wHi) - OpAmp(wHi),
                 n.RisingSlope(wHi) - n.FallingSlope(wLo) - OpAmp(wLo));

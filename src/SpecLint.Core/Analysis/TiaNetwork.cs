@@ -4,7 +4,7 @@ namespace SpecLint.Core.Analysis;
 
 /// <summary>
 /// The feedback and input networks of a circuit with more than Rf ∥ Cf and a sensor at the node (references.md
-/// §D7): the selected branch (Rf ∥ Cf in series with a switch's on-resistance or a wiper), each unselected branch
+/// §D8): the selected branch (Rf ∥ Cf in series with a switch's on-resistance or a wiper), each unselected branch
 /// (Rf_k ∥ Cf_k in series with its switch's off-capacitance), and an electrode (current source ∥ Cd ∥ Rsh, then
 /// the access resistance Rs to the node, where the op-amp's and the board's capacitance sit).
 /// </summary>

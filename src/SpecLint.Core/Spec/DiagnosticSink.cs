@@ -15,6 +15,10 @@ internal sealed class DiagnosticSink(string file, string ruleId, YamlTree tree)
 
     public int Count => _items.Count;
 
+    /// <summary>Whether the node or anything under it already has a problem.</summary>
+    public bool HasFailedWithin(string pointer) =>
+        _failed.Any(p => p == pointer || p.StartsWith(pointer + "/", StringComparison.Ordinal));
+
     /// <summary>Whether the node or one of its ancestors already has a problem.</summary>
     public bool HasFailed(string pointer)
     {

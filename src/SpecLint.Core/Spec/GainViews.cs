@@ -6,7 +6,7 @@ using SpecLint.Core.Units;
 namespace SpecLint.Core.Spec;
 
 /// <summary>
-/// A channel with more than one gain is checked as one view per setting (references.md §D7): each view is an
+/// A channel with more than one gain is checked as one view per setting (references.md §D8): each view is an
 /// ordinary spec whose feedback, signal range and requirements are that setting's, and whose keys locate at the
 /// setting's own lines. A single-gain spec is its own only view.
 /// </summary>

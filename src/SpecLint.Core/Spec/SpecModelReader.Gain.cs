@@ -7,7 +7,7 @@ using SpecLint.Core.Units;
 
 namespace SpecLint.Core.Spec;
 
-/// <summary>The keys of channels with more than one gain (references.md §D7), and the requirements block they share.</summary>
+/// <summary>The keys of channels with more than one gain (references.md §D8), and the requirements block they share.</summary>
 internal sealed partial class SpecModelReader
 {
     // A real part's tolerance: beyond ±50 % or a max/min ratio of 3 a spread is a range of settings, not a tolerance.
@@ -243,7 +243,8 @@ internal sealed partial class SpecModelReader
                 }
             }
         }
-        else if (!tree.Positions.ContainsKey("/feedback/resistance") && Has("/feedback"))
+        // A misspelt key was already reported with the name it should have; the missing resistance follows from it.
+        else if (!tree.Positions.ContainsKey("/feedback/resistance") && Has("/feedback") && !sink.HasFailedWithin("/feedback"))
         {
             sink.AtValue("/feedback", "the feedback needs a resistance: write \"resistance: 1 MΩ ±1%\", or list switched gains under \"settings\"");
         }

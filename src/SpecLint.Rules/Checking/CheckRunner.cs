@@ -118,7 +118,7 @@ internal static class CheckRunner
         return CheckSpec(spec, config, options, tolerances);
     }
 
-    /// <summary>Checks an already loaded spec: once, or once per gain setting (references.md §D7).</summary>
+    /// <summary>Checks an already loaded spec: once, or once per gain setting (references.md §D8).</summary>
     public static SpecOutcome CheckSpec(TiaSpec spec, RepoConfig config, CheckOptions options, Func<TiaSpec, RepoConfig, bool, ToleranceResult?>? tolerances = null)
     {
         ArgumentNullException.ThrowIfNull(spec);

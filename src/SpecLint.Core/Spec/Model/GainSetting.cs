@@ -2,7 +2,7 @@ using SpecLint.Core.Units;
 
 namespace SpecLint.Core.Spec.Model;
 
-/// <summary>One named setting of a switched-gain channel (<c>feedback.settings</c>, references.md §D7).</summary>
+/// <summary>One named setting of a switched-gain channel (<c>feedback.settings</c>, references.md §D8).</summary>
 /// <param name="Name">The setting's name, unique in the spec.</param>
 /// <param name="Resistance">Its Rf.</param>
 /// <param name="Capacitance">Its Cf, or null.</param>
