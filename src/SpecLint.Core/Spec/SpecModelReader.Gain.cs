@@ -53,7 +53,7 @@ internal sealed partial class SpecModelReader
 
         var spread = ratio > WidestRatio
             ? $"spans a factor of {ratio.ToString("0.###", CultureInfo.InvariantCulture)} ({Format(q.Min, q.Dimension)} .. {Format(q.Max, q.Dimension)})"
-            : $"is a ±{(relative * 100).ToString("0.#", CultureInfo.InvariantCulture)} % spread";
+            : $"reaches {(relative * 100).ToString("0.#", CultureInfo.InvariantCulture)} % from its typical value";
         var low = Format(q.Min, q.Dimension);
         var high = Format(q.Max, q.Dimension);
         var how = kind switch

@@ -78,7 +78,7 @@ public sealed class GainKeysReaderTests
     [Theory]
     [InlineData("  resistance: 10 kΩ .. 10 MΩ\n  capacitance: 2 pF", "/feedback/resistance", 21, 15, "adjustable: 10 kΩ .. 10 MΩ")]
     [InlineData("  resistance: 1 MΩ ±60%\n  capacitance: 2 pF", "/feedback/resistance", 21, 15, "spans a factor of 4")]
-    [InlineData("  resistance: 1 MΩ ±55%\n  capacitance: 2 pF", "/feedback/resistance", 21, 15, "±55 % spread")]
+    [InlineData("  resistance: 1 MΩ +60%/-10%\n  capacitance: 2 pF", "/feedback/resistance", 21, 15, "reaches 60 % from its typical value")]
     [InlineData("  resistance: 1 MΩ\n  capacitance: { min: 1 pF, max: 5 pF }", "/feedback/capacitance", 22, 16, "feedback.settings")]
     public void A_spread_no_part_has_is_refused_where_it_is_written(string feedback, string pointer, int line, int column, string hint)
     {
