@@ -22,7 +22,8 @@ public sealed class NonStandardPartValueRule : IRule
         var spec = context.Spec;
         var rf = spec.Feedback.Resistance;
         var rfSeries = StandardValueSearch.SeriesFor<Resistance>(rf, ESeries.E96);
-        if (!rfSeries.ContainsWithCoarser(rf.Typ.Ohms))
+        // A potentiometer's setting is not a part value: no series applies to it.
+        if (spec.Feedback.Adjustable is null && !rfSeries.ContainsWithCoarser(rf.Typ.Ohms))
         {
             var nearest = new Resistance(rfSeries.Nearest(rf.Typ.Ohms));
             yield return context.Report("/feedback/resistance",

@@ -33,8 +33,12 @@ public static class CircuitFactory
         var amp = spec.Amplifier;
         var input = spec.Input;
         var fb = spec.Feedback;
+        var (series, off) = Switched(spec);
         return new Circuit
         {
+            FeedbackSeriesResistance = series,
+            OffBranches = off,
+            SeriesResistance = input.SeriesResistance is { } rs ? picker.Pick(SpecPointers.SeriesResistance, rs) : Resistance.Zero,
             Rf = picker.Pick(SpecPointers.FeedbackResistance, fb.Resistance),
             Cf = fb.Capacitance is { } cf ? picker.Pick(SpecPointers.FeedbackCapacitance, cf) : Capacitance.Zero,
             Cpar = picker.Pick(SpecPointers.ParasiticCapacitance, fb.ParasiticCapacitance),
@@ -64,5 +68,33 @@ public static class CircuitFactory
             Temperature = temperature,
             Responsivity = input.Responsivity,
         };
+    }
+
+    /// <summary>
+    /// A switched channel's selected branch sees the switch's on-resistance; every other setting's branch (at its
+    /// typical values) reaches the node through an open switch's off-capacitance. An ideal switch (none given) has
+    /// neither, and the unselected branches then drop out.
+    /// </summary>
+    private static (Resistance Series, System.Collections.Immutable.ImmutableArray<OffBranch> Off) Switched(TiaSpec spec)
+    {
+        var fb = spec.Feedback;
+        if (fb.Settings.IsDefaultOrEmpty || fb.Switch is not { } sw)
+        {
+            return (Resistance.Zero, []);
+        }
+
+        var off = System.Collections.Immutable.ImmutableArray.CreateBuilder<OffBranch>();
+        if (sw.OffCapacitance.Farads > 0)
+        {
+            foreach (var s in fb.Settings)
+            {
+                if (s.Name != spec.Setting)
+                {
+                    off.Add(new OffBranch(s.Resistance.Typ, (s.Capacitance?.Typ ?? Capacitance.Zero) + s.ParasiticCapacitance.Typ, sw.OffCapacitance));
+                }
+            }
+        }
+
+        return (sw.OnResistance, off.ToImmutable());
     }
 }

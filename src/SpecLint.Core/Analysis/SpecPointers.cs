@@ -18,6 +18,9 @@ public static class SpecPointers
     /// <summary>Sensor shunt resistance.</summary>
     public const string ShuntResistance = "/input/shunt-resistance";
 
+    /// <summary>An electrode's access resistance.</summary>
+    public const string SeriesResistance = "/input/series-resistance";
+
     /// <summary>Sensor dark current.</summary>
     public const string DarkCurrent = "/input/dark-current";
 

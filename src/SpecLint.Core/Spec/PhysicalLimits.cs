@@ -58,6 +58,11 @@ internal static class PhysicalLimits
         ["/amplifier/slew-rate"] = new(1e-3, 1e12, 0, "0.001 V/s .. 1000000 V/µs"),
         ["/amplifier/min-stable-gain"] = new(1e-10, 1e6, 0, "-200 dB .. 120 dB (1000000 V/V)"),
         ["/feedback/resistance"] = new(1e-3, 1e15, 0, "1 mΩ .. 1000 TΩ"),
+        ["/feedback/resistance/adjustable"] = new(1e-3, 1e15, 0, "1 mΩ .. 1000 TΩ"),
+        ["/feedback/resistance/wiper-resistance"] = new(0, 1e9, 0, "0 Ω .. 1 GΩ"),
+        ["/feedback/switch/on-resistance"] = new(0, 1e9, 0, "0 Ω .. 1 GΩ"),
+        ["/feedback/switch/off-capacitance"] = FeedbackCapacitance,
+        ["/input/series-resistance"] = new(0, 1e12, 0, "0 Ω .. 1 TΩ"),
         ["/feedback/capacitance"] = FeedbackCapacitance,
         ["/feedback/parasitic-capacitance"] = FeedbackCapacitance,
         ["/board/stray-capacitance"] = SensorCapacitance,
@@ -74,6 +79,7 @@ internal static class PhysicalLimits
     /// <summary>The limits of a quantity key or of a min/typ/max entry under one; null for other keys.</summary>
     public static Limit? For(string pointer)
     {
+        pointer = SettingKeys.ChannelPointer(pointer);
         if (Limits.TryGetValue(pointer, out var limit))
         {
             return limit;

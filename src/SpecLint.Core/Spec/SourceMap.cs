@@ -16,6 +16,27 @@ public sealed class SourceMap
     /// <summary>An empty map (every lookup gives the start of the file).</summary>
     public static SourceMap Empty { get; } = new(new Dictionary<string, SourcePosition>());
 
+    /// <summary>
+    /// The same map, where each view key also locates: a key under <c>View</c> is found where the same key under
+    /// <c>File</c> is written (a gain setting's <c>/feedback/resistance</c> at <c>/feedback/settings/1/resistance</c>).
+    /// </summary>
+    internal SourceMap WithAliases(IEnumerable<(string View, string File)> aliases)
+    {
+        var positions = new Dictionary<string, SourcePosition>(_positions, StringComparer.Ordinal);
+        foreach (var (view, file) in aliases)
+        {
+            foreach (var (key, pos) in _positions)
+            {
+                if (key == file || (view != "/feedback" && key.StartsWith(file + "/", StringComparison.Ordinal)))
+                {
+                    positions[view + key[file.Length..]] = pos;
+                }
+            }
+        }
+
+        return new SourceMap(positions);
+    }
+
     /// <summary>Whether the pointer names a node that was written in the file.</summary>
     public bool Contains(string pointer) => _positions.ContainsKey(pointer);
 

@@ -47,16 +47,30 @@ internal sealed partial class SpecModelReader(YamlTree tree, DiagnosticSink sink
         {
             "phototransistor" => SensorType.Phototransistor,
             "current-source" => SensorType.CurrentSource,
+            "electrode" => SensorType.Electrode,
             _ => SensorType.Photodiode,
         };
-        var sensorC = SpreadOf<Capacitance>("/input/capacitance", (p, q) => CheckCapacitance(p, q, "the sensor capacitance", inFeedback: false));
-        var shunt = SpreadOf<Resistance>("/input/shunt-resistance", (p, q) => CheckPositive(p, q, "the shunt resistance", "2 GΩ"));
+        var sensorC = SpreadOf<Capacitance>("/input/capacitance", (p, q) =>
+        {
+            CheckCapacitance(p, q, "the sensor capacitance", inFeedback: false);
+            CheckPartSpread(p, q, "the sensor capacitance", PartKind.Sensor);
+        });
+        var shunt = SpreadOf<Resistance>("/input/shunt-resistance", (p, q) =>
+        {
+            CheckPositive(p, q, "the shunt resistance", "2 GΩ");
+            CheckPartSpread(p, q, "the shunt resistance", PartKind.Sensor);
+        });
+        var seriesR = SeriesResistance(sensorType);
         var dark = SpreadOf<Current>("/input/dark-current", (p, q) => CheckNonNegative(p, q, "the dark current"));
         var (iMin, iMax) = SignalCurrent();
         var direction = Str("/input/current-direction") == "into-node" ? CurrentDirection.IntoNode : CurrentDirection.OutOfNode;
         var responsivity = SingleOf<Responsivity>("/input/responsivity", (p, q) => CheckPositive(p, q, "the responsivity", "0.42 A/W"));
 
-        var gbw = SpreadOf<Frequency>("/amplifier/gbw", (p, q) => CheckPositive(p, q, "the gain-bandwidth product", "8 MHz"));
+        var gbw = SpreadOf<Frequency>("/amplifier/gbw", (p, q) =>
+        {
+            CheckPositive(p, q, "the gain-bandwidth product", "8 MHz");
+            CheckPartSpread(p, q, "the gain-bandwidth product", PartKind.Amplifier);
+        });
         var aol = GainOf("/amplifier/open-loop-gain", "the open-loop gain", "120 dB");
         if (aol is { } a && a.Linear < 1)
         {
@@ -92,38 +106,26 @@ internal sealed partial class SpecModelReader(YamlTree tree, DiagnosticSink sink
             }
         });
 
-        var rf = SpreadOf<Resistance>("/feedback/resistance", (p, q) => CheckPositive(p, q, "the feedback resistance", "1 MΩ ±1%"));
-        var cf = SpreadOf<Capacitance>("/feedback/capacitance", (p, q) => CheckCapacitance(p, q, "the feedback capacitance", inFeedback: true));
+        var settings = Settings();
+        var gainSwitch = Switch(settings);
+        var adjustable = Adjustable();
+        var rf = adjustable is not null ? null : FeedbackResistance("/feedback/resistance");
+        var cf = FeedbackCapacitance("/feedback/capacitance");
         var dielectric = Str("/feedback/dielectric");
         var cpar = SpreadOf<Capacitance>("/feedback/parasitic-capacitance", (p, q) => CheckCapacitance(p, q, "the parasitic capacitance", inFeedback: true));
+        CheckFeedbackShape();
         var stray = SpreadOf<Capacitance>("/board/stray-capacitance", (p, q) => CheckCapacitance(p, q, "the stray capacitance", inFeedback: false));
 
-        var bandwidth = SingleOf<Frequency>("/requirements/bandwidth", (p, q) => CheckPositive(p, q, "the bandwidth", "50 kHz"));
-        var pm = SingleOf<Angle>("/requirements/phase-margin", (p, q) =>
-        {
-            var deg = Angle.FromSi(q.Typ).Degrees;
-            if (deg <= 0 || deg >= 180)
-            {
-                sink.AtValue(p, $"a phase-margin floor must lie between 0 deg and 180 deg; 45 deg to 60 deg is usual, e.g. \"55 deg\"");
-            }
-        });
-        var peaking = GainOf("/requirements/peaking", "the peaking", "1 dB");
-        if (peaking is { } pk && pk.Linear < 1)
-        {
-            sink.AtValue("/requirements/peaking", "the peaking limit cannot be below 0 dB; e.g. \"1 dB\"");
-        }
-
-        var (bandLow, bandHigh) = NoiseBand();
-        var maxInput = SingleOf<Current>("/requirements/noise/max-input", (p, q) => CheckPositive(p, q, "the noise limit", "20 pA"));
-        var waivers = Waivers();
+        var requirements = ReadRequirements("/requirements");
+        var waivers = Waivers(settings, adjustable is not null);
 
         if (sink.Count > 0)
         {
             return null;
         }
 
-        var noise = Has("/requirements/noise") ? new NoiseRequirement(bandLow, bandHigh, maxInput) : null;
-        return new TiaSpec(
+        var first = settings.IsDefaultOrEmpty ? null : settings[0];
+        var read = new TiaSpec(
             file,
             Req(spec),
             Req(kind),
@@ -132,14 +134,27 @@ internal sealed partial class SpecModelReader(YamlTree tree, DiagnosticSink sink
             tags,
             new Conditions(Req(temperature), Req(supplyPos), Req(supplyNeg)),
             Req(bias),
-            new SensorInput(sensorType, Req(sensorC), shunt, dark ?? Spread<Current>.Exact(Current.FromSi(0)), Req(iMin), Req(iMax), direction, responsivity),
+            new SensorInput(sensorType, Req(sensorC), shunt, dark ?? Spread<Current>.Exact(Current.FromSi(0)), Req(iMin), Req(iMax), direction, responsivity)
+            {
+                SeriesResistance = seriesR,
+            },
             new Amplifier(Req(gbw), aol ?? Gain.FromDecibels(120), secondPole, Req(en), enCorner, Req(inNoise), inCorner,
                 Req(ccm), Req(cdiff), Req(ib), Req(vos), Req(swingNeg), Req(swingPos), slew, minGain) { BiasCurrentDoubling = doubling },
-            new Feedback(Req(rf), cf, dielectric, cpar ?? Spread<Capacitance>.Exact(Capacitance.Zero)),
+            new Feedback(
+                first?.Resistance ?? rf ?? AdjustableStart(adjustable),
+                first is null ? cf : first.Capacitance,
+                first is null ? dielectric : first.Dielectric,
+                first?.ParasiticCapacitance ?? cpar ?? Spread<Capacitance>.Exact(Capacitance.Zero))
+            {
+                Settings = settings.IsDefault ? [] : settings,
+                Switch = gainSwitch,
+                Adjustable = adjustable,
+            },
             new Board(stray ?? Spread<Capacitance>.Exact(Capacitance.Zero)),
-            new Requirements(bandwidth, pm, peaking?.Decibels, noise),
+            requirements ?? Requirements.None,
             waivers,
             tree.ToSourceMap());
+        return first is null ? read : GainViews.Select(read, 0);
     }
 
     private static T Req<T>(T? value)
@@ -311,9 +326,8 @@ internal sealed partial class SpecModelReader(YamlTree tree, DiagnosticSink sink
         return (min, max);
     }
 
-    private (Frequency? Low, Frequency? High) NoiseBand()
+    private (Frequency? Low, Frequency? High) NoiseBand(string pointer)
     {
-        const string pointer = "/requirements/noise/band";
         var band = Parse(pointer, Dimension.Frequency, single: false);
         if (band is null || !Finite(pointer, band))
         {
@@ -340,7 +354,7 @@ internal sealed partial class SpecModelReader(YamlTree tree, DiagnosticSink sink
         return (Frequency.FromSi(band.Min), Frequency.FromSi(band.Max));
     }
 
-    private ImmutableArray<Waiver> Waivers()
+    private ImmutableArray<Waiver> Waivers(ImmutableArray<GainSetting> settings, bool adjustable)
     {
         if (!Has("/waivers") || Node("/waivers") is not JsonArray items)
         {
@@ -360,9 +374,20 @@ internal sealed partial class SpecModelReader(YamlTree tree, DiagnosticSink sink
                 continue;
             }
 
+            var setting = Str(at + "/setting");
+            if (setting is not null && !settings.Any(s => s.Name == setting))
+            {
+                sink.AtValue(at + "/setting", settings.IsDefaultOrEmpty
+                    ? adjustable
+                        ? "an adjustable Rf has no named settings; leave 'setting' out so the waiver covers the whole range"
+                        : "this channel has no feedback.settings; leave 'setting' out"
+                    : $"there is no setting named '{setting}'; the settings are {string.Join(", ", settings.Select(s => s.Name))}");
+                continue;
+            }
+
             if (rule is not null && reason is not null && expires is not null)
             {
-                list.Add(new Waiver(rule, reason, DateOnly.ParseExact(expires, "yyyy-MM-dd", CultureInfo.InvariantCulture), at));
+                list.Add(new Waiver(rule, reason, DateOnly.ParseExact(expires, "yyyy-MM-dd", CultureInfo.InvariantCulture), at) { Setting = setting });
             }
         }
 

@@ -6,9 +6,11 @@ namespace SpecLint.Reporting.Json;
 /// <summary>The <c>corners</c> and <c>monteCarlo</c> members of a spec in the JSON output (references.md §D5).</summary>
 internal static class CornersJson
 {
-    public static void Write(Utf8JsonWriter w, SpecOutcome spec)
+    public static void Write(Utf8JsonWriter w, SpecOutcome spec) => Write(w, spec.Tolerances);
+
+    public static void Write(Utf8JsonWriter w, Core.Analysis.Tolerance.ToleranceResult? tolerances)
     {
-        if (spec.Tolerances is not { } t)
+        if (tolerances is not { } t)
         {
             w.WriteNull("corners");
             w.WriteNull("monteCarlo");

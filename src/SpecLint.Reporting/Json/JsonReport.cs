@@ -69,7 +69,43 @@ internal static class JsonReport
         }
 
         w.WriteEndArray();
+        if (!spec.Settings.IsDefaultOrEmpty)
+        {
+            WriteSettings(w, spec, run);
+        }
+
         w.WriteEndObject();
+    }
+
+    /// <summary>A channel with more than one gain: each setting's figures and findings (the spec's own members hold the first setting's figures).</summary>
+    private static void WriteSettings(Utf8JsonWriter w, SpecOutcome spec, CheckRun run)
+    {
+        w.WriteStartArray("settings");
+        foreach (var s in spec.Settings)
+        {
+            w.WriteStartObject();
+            w.WriteString("name", s.Name);
+            if (s.Analysis is { } a)
+            {
+                WriteMetrics(w, a);
+            }
+            else
+            {
+                w.WriteNull("metrics");
+            }
+
+            CornersJson.Write(w, s.Tolerances);
+            w.WriteStartArray("findings");
+            foreach (var f in s.Findings)
+            {
+                WriteFinding(w, f, run.IsAccepted(f));
+            }
+
+            w.WriteEndArray();
+            w.WriteEndObject();
+        }
+
+        w.WriteEndArray();
     }
 
     private static void WriteMetrics(Utf8JsonWriter w, AnalysisResult a)
@@ -130,6 +166,11 @@ internal static class JsonReport
         w.WriteNumber("line", f.Line);
         w.WriteNumber("column", f.Column);
         w.WriteString("pointer", f.Pointer);
+        if (f.Setting is not null)
+        {
+            w.WriteString("setting", f.Setting);
+        }
+
         if (f.Fix is { } fix)
         {
             w.WriteStartObject("fix");

@@ -118,34 +118,95 @@ internal static class CheckRunner
         return CheckSpec(spec, config, options, tolerances);
     }
 
-    /// <summary>Checks an already loaded spec.</summary>
+    /// <summary>Checks an already loaded spec: once, or once per gain setting (references.md §D7).</summary>
     public static SpecOutcome CheckSpec(TiaSpec spec, RepoConfig config, CheckOptions options, Func<TiaSpec, RepoConfig, bool, ToleranceResult?>? tolerances = null)
     {
         ArgumentNullException.ThrowIfNull(spec);
         ArgumentNullException.ThrowIfNull(config);
         ArgumentNullException.ThrowIfNull(options);
         tolerances ??= StandardTolerances.Analyze;
-        var analyzer = new DefaultSpecAnalyzer((s, mc) => options.Tolerances ? tolerances(s, config, mc) : null);
-        SpecAnalysis analysis;
-        IReadOnlyList<Finding> findings;
+        IReadOnlyList<TiaSpec> views;
         try
         {
-            analysis = analyzer.Analyze(spec, includeNoise: true, includeCorners: true, monteCarlo: true);
-            // Fix searches re-run the analysis on candidate values, which can fail the same way.
-            findings = new RuleRunner(options.Catalog, config, analyzer).Run(analysis);
+            views = GainViews.All(spec);
         }
         catch (Exception e) when (AnalysisFailedException.IsNumericalFailure(e))
         {
-            var at = spec.Locations.Locate("");
-            var failed = new Finding(RuleIds.AnalysisFailed, Severity.Error, spec.File, "", at.Line, at.Column, $"the analysis failed: {e.Message}; check the values for a typo in a prefix");
-            return new SpecOutcome(spec.File, spec, null, null, null, [failed, .. ImplausibleValues(spec, config, options.Catalog)]);
+            return Failed(spec, config, options, e, null);
         }
 
-        var all = WaiverApplication.Apply(spec, findings, options.Today, options.Catalog.KnownIds)
-            .OrderBy(f => f.Line).ThenBy(f => f.Column).ThenBy(f => f.RuleId, StringComparer.Ordinal).ThenBy(f => f.Message, StringComparer.Ordinal)
-            .ToImmutableArray();
-        return new SpecOutcome(spec.File, spec, analysis.Circuit, analysis.Analysis, analysis.Tolerances, all);
+        if (views.Count == 1 && views[0].Setting is null)
+        {
+            var (analysis, findings, failure) = CheckView(views[0], config, options, tolerances);
+            if (failure is not null)
+            {
+                return Failed(spec, config, options, failure, null);
+            }
+
+            var all = Order(WaiverApplication.Apply(spec, findings, options.Today, options.Catalog.KnownIds));
+            return new SpecOutcome(spec.File, spec, analysis!.Circuit, analysis.Analysis, analysis.Tolerances, all);
+        }
+
+        return CheckSettings(spec, views, config, options, tolerances);
     }
+
+    private static SpecOutcome CheckSettings(TiaSpec spec, IReadOnlyList<TiaSpec> views, RepoConfig config, CheckOptions options, Func<TiaSpec, RepoConfig, bool, ToleranceResult?> tolerances)
+    {
+        var channel = spec.Channel ?? spec;
+        var adjustable = channel.Feedback.Adjustable is not null;
+        var perView = new List<(TiaSpec View, SpecAnalysis? Analysis, List<Finding> Findings)>();
+        foreach (var view in views)
+        {
+            var (analysis, findings, failure) = CheckView(view, config, options, tolerances);
+            var list = failure is null
+                ? [.. findings.Select(f => SettingFindings.Remap(view, f, adjustable))]
+                : Failed(view, config, options, failure, view.Setting).Findings.ToList();
+            perView.Add((view, failure is null ? analysis : null, list));
+        }
+
+        var merged = SettingFindings.Merge([.. perView.Select(p => (p.View.Setting!, (IReadOnlyList<Finding>)p.Findings))], adjustable);
+        var all = Order(WaiverApplication.Apply(channel, merged, options.Today, options.Catalog.KnownIds));
+        var settings = perView
+            .Select(p => new SettingOutcome(
+                p.View.Setting!,
+                p.View,
+                p.Analysis?.Circuit,
+                p.Analysis?.Analysis,
+                p.Analysis?.Tolerances,
+                [.. all.Where(f => f.Setting is null || f.Setting == p.View.Setting)]))
+            .ToImmutableArray();
+        var first = perView[0].Analysis;
+        return new SpecOutcome(spec.File, spec, first?.Circuit, first?.Analysis, first?.Tolerances, all) { Settings = settings };
+    }
+
+    private static (SpecAnalysis? Analysis, IReadOnlyList<Finding> Findings, Exception? Failure) CheckView(
+        TiaSpec view, RepoConfig config, CheckOptions options, Func<TiaSpec, RepoConfig, bool, ToleranceResult?> tolerances)
+    {
+        var analyzer = new DefaultSpecAnalyzer((s, mc) => options.Tolerances ? tolerances(s, config, mc) : null);
+        try
+        {
+            var analysis = analyzer.Analyze(view, includeNoise: true, includeCorners: true, monteCarlo: true);
+            // Fix searches re-run the analysis on candidate values, which can fail the same way.
+            return (analysis, new RuleRunner(options.Catalog, config, analyzer).Run(analysis), null);
+        }
+        catch (Exception e) when (AnalysisFailedException.IsNumericalFailure(e))
+        {
+            return (null, [], e);
+        }
+    }
+
+    private static SpecOutcome Failed(TiaSpec spec, RepoConfig config, CheckOptions options, Exception e, string? setting)
+    {
+        var at = spec.Locations.Locate("");
+        var failed = new Finding(RuleIds.AnalysisFailed, Severity.Error, spec.File, "", at.Line, at.Column, $"the analysis failed: {e.Message}; check the values for a typo in a prefix") { Setting = setting };
+        return new SpecOutcome(spec.File, spec, null, null, null, [failed, .. ImplausibleValues(spec, config, options.Catalog).Select(f => f with { Setting = setting })]);
+    }
+
+    private static ImmutableArray<Finding> Order(IEnumerable<Finding> findings) =>
+        findings
+            .OrderBy(f => f.Line).ThenBy(f => f.Column).ThenBy(f => f.RuleId, StringComparer.Ordinal)
+            .ThenBy(f => f.Setting ?? "", StringComparer.Ordinal).ThenBy(f => f.Message, StringComparer.Ordinal)
+            .ToImmutableArray();
 
     // The plausibility check needs no analysis: when a value far off makes the analysis fail, it still names the
     // value and the prefix that fits, which is most often the cause.

@@ -21,6 +21,9 @@ internal sealed record SpecOutcome(
     ToleranceResult? Tolerances,
     ImmutableArray<Finding> Findings)
 {
+    /// <summary>One entry per gain setting of a channel with more than one gain; empty for a single gain.</summary>
+    public ImmutableArray<SettingOutcome> Settings { get; init; } = [];
+
     /// <summary>The spec's name, or the file name when it did not load.</summary>
     public string Name => Spec?.Name ?? Path.GetFileName(File);
 
@@ -33,3 +36,18 @@ internal sealed record SpecOutcome(
     /// <summary>The highest severity among unwaived findings, or null when there are none.</summary>
     public Severity? WorstSeverity => Findings.Where(f => !f.Waived).Select(f => (Severity?)f.Severity).Max();
 }
+
+/// <summary>What a run learned about one gain setting of a spec.</summary>
+/// <param name="Name">The setting's name (or an adjustable Rf's position).</param>
+/// <param name="Spec">The view of the spec at this setting.</param>
+/// <param name="Circuit">Its nominal operating point, or null when the analysis failed.</param>
+/// <param name="Analysis">Its nominal analysis, or null.</param>
+/// <param name="Tolerances">Its corners and Monte Carlo, or null.</param>
+/// <param name="Findings">The findings of this setting, and those every setting shares.</param>
+internal sealed record SettingOutcome(
+    string Name,
+    TiaSpec Spec,
+    Circuit? Circuit,
+    AnalysisResult? Analysis,
+    ToleranceResult? Tolerances,
+    ImmutableArray<Finding> Findings);

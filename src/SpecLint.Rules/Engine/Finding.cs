@@ -34,7 +34,16 @@ public sealed record Finding(
     /// <summary>The waiver's reason as written in the spec, control characters shown as escapes.</summary>
     public string? WaiverReason { get; init; } = WaiverReason is null ? null : TextSafety.ForTerminal(WaiverReason);
 
-    /// <summary>The terminal form of references.md §D6: <c>file:line:col: severity rule-id: message</c>.</summary>
+    /// <summary>
+    /// The gain setting the finding belongs to (a switched setting's name, or an adjustable Rf's position), or null
+    /// for a single-gain channel and for findings every setting shares.
+    /// </summary>
+    public string? Setting { get; init; }
+
+    /// <summary>The terminal form of references.md §D6: <c>file:line:col: severity rule-id: message [setting name]</c>.</summary>
     public override string ToString() =>
-        $"{File}:{Line}:{Column}: {Severity.Name()} {RuleId}: {Message}{(Waived ? " (waived: " + WaiverReason + ")" : "")}";
+        $"{File}:{Line}:{Column}: {Severity.Name()} {RuleId}: {Message}{SettingSuffix}{(Waived ? " (waived: " + WaiverReason + ")" : "")}";
+
+    /// <summary>" [setting name]" for a finding of one setting, else empty.</summary>
+    public string SettingSuffix => Setting is null ? "" : $" [setting {TextSafety.ForTerminal(Setting)}]";
 }

@@ -30,7 +30,7 @@ internal static class WaiverApplication
             var matched = false;
             for (var i = 0; i < result.Count; i++)
             {
-                if (result[i].RuleId == waiver.Rule && !result[i].Waived && result[i].RuleId != RuleIds.WaiverExpired && !RuleIds.HouseRuleIds.Contains(result[i].RuleId))
+                if (result[i].RuleId == waiver.Rule && !result[i].Waived && (waiver.Setting is null || result[i].Setting == waiver.Setting) && result[i].RuleId != RuleIds.WaiverExpired && !RuleIds.HouseRuleIds.Contains(result[i].RuleId))
                 {
                     result[i] = result[i] with { Waived = true, WaiverReason = waiver.Reason };
                     matched = true;

@@ -11,4 +11,18 @@ public sealed record Feedback(
     Spread<Resistance> Resistance,
     Spread<Capacitance>? Capacitance,
     string? Dielectric,
-    Spread<Capacitance> ParasiticCapacitance);
+    Spread<Capacitance> ParasiticCapacitance)
+{
+    /// <summary>
+    /// The named settings of a switched-gain channel, as written; empty for a single gain. In a spec with settings,
+    /// <see cref="Resistance"/>, <see cref="Capacitance"/> and the rest hold the selected setting's values (see
+    /// <see cref="TiaSpec.Setting"/>).
+    /// </summary>
+    public System.Collections.Immutable.ImmutableArray<GainSetting> Settings { get; init; } = [];
+
+    /// <summary>The gain switch of a switched-gain channel, or null (an ideal switch).</summary>
+    public GainSwitch? Switch { get; init; }
+
+    /// <summary>The adjustment range of a potentiometer Rf, or null for a fixed resistor.</summary>
+    public AdjustableResistance? Adjustable { get; init; }
+}

@@ -3,7 +3,7 @@ using SpecLint.Core.Units;
 namespace SpecLint.Core.Spec.Model;
 
 /// <summary>The sensor: a current source with its capacitance and shunt resistance.</summary>
-/// <param name="Type">Photodiode, phototransistor or plain current source.</param>
+/// <param name="Type">Photodiode, phototransistor, electrode or plain current source.</param>
 /// <param name="Capacitance">Sensor capacitance at the bias used.</param>
 /// <param name="ShuntResistance">Shunt resistance, or null for infinite.</param>
 /// <param name="DarkCurrent">Current flowing with no signal (zero when not given).</param>
@@ -19,4 +19,8 @@ public sealed record SensorInput(
     Current CurrentMin,
     Current CurrentMax,
     CurrentDirection Direction,
-    Responsivity? Responsivity);
+    Responsivity? Responsivity)
+{
+    /// <summary>An electrode's access resistance between the source and the summing node, or null for none.</summary>
+    public Spread<Resistance>? SeriesResistance { get; init; }
+}

@@ -6,4 +6,5 @@ public enum SensorType
     Photodiode,
     Phototransistor,
     CurrentSource,
+    Electrode,
 }

@@ -34,4 +34,17 @@ public sealed record TiaSpec(
     Board Board,
     Requirements Requirements,
     ImmutableArray<Waiver> Waivers,
-    SourceMap Locations);
+    SourceMap Locations)
+{
+    /// <summary>
+    /// The gain setting this spec describes: a switched setting's name or an adjustable Rf's position (e.g.
+    /// "Rf 182 kΩ"); null for a single-gain channel. The engine checks one such view of the spec per setting.
+    /// </summary>
+    public string? Setting { get; init; }
+
+    /// <summary>How this view's keys map onto the file's: view prefix → file prefix, longest first (empty for the file itself).</summary>
+    internal System.Collections.Immutable.ImmutableArray<(string View, string File)> SettingPointers { get; init; } = [];
+
+    /// <summary>The spec as its file gives the channel, before a setting was selected; null for the file's own spec.</summary>
+    internal TiaSpec? Channel { get; init; }
+}
