@@ -7,7 +7,8 @@ namespace SpecLint.Benchmarks;
 /// Entry point: <c>dotnet run -c Release --project tests/SpecLint.Benchmarks -- --filter '*'</c> for the
 /// BenchmarkDotNet suites, <c>-- montecarlo [specs] [samples]</c> for the timed tolerance run, <c>-- check [specs] [repeats]</c> for whole checks
 /// in a child process, or <c>-- houserules [repeats]</c> for
-/// the whole-process cost of compiling and of loading cached house rules.
+/// the whole-process cost of compiling and of loading cached house rules, or <c>-- profile [rounds]</c> for the time and
+/// memory of each stage of one spec, <c>-- profile-cold</c> for the first spec of a fresh process.
 /// </summary>
 public static class Program
 {
@@ -28,6 +29,18 @@ public static class Program
             CheckBench.Run(
                 args.Length > 1 ? int.Parse(args[1], CultureInfo.InvariantCulture) : 1000,
                 args.Length > 2 ? int.Parse(args[2], CultureInfo.InvariantCulture) : 3);
+            return;
+        }
+
+        if (args.Length > 0 && args[0] == "profile-cold")
+        {
+            ColdProfileBench.Run();
+            return;
+        }
+
+        if (args.Length > 0 && args[0] == "profile")
+        {
+            ProfileBench.Run(args.Length > 1 ? int.Parse(args[1], CultureInfo.InvariantCulture) : 20);
             return;
         }
 

@@ -5,8 +5,7 @@ using SpecLint.Rules.Checking;
 namespace SpecLint.Rules.Engine;
 
 /// <summary>
-/// The rules a run uses, discovered by reflection: every public, non-abstract <see cref="IRule"/> with a
-/// parameterless constructor in the given assemblies. No hand-kept list, so a rule cannot be forgotten.
+/// The rules a run uses: the built-in rules of <see cref="BuiltInRules"/>, plus house rules.
 /// </summary>
 internal sealed class RuleCatalog
 {
@@ -55,24 +54,29 @@ internal sealed class RuleCatalog
     public ImmutableArray<IRule> Rules { get; }
 
     /// <summary>The built-in rules compiled from <c>rules/</c>.</summary>
-    public static RuleCatalog BuiltIn { get; } = Discover(typeof(RuleCatalog).Assembly);
+    public static RuleCatalog BuiltIn { get; } = Of(BuiltInRules.Create());
 
-    /// <summary>Finds the rules in <paramref name="assemblies"/>; throws when two rules share an id.</summary>
-    public static RuleCatalog Discover(params Assembly[] assemblies)
-    {
-        var rules = assemblies
+    /// <summary>
+    /// Finds the rules in <paramref name="assemblies"/> by reflection: every public, non-abstract <see cref="IRule"/>
+    /// with a parameterless constructor. Slow at start-up; tests use it to hold <see cref="BuiltInRules"/> to the classes.
+    /// </summary>
+    public static RuleCatalog Discover(params Assembly[] assemblies) =>
+        Of(assemblies
             .SelectMany(a => a.GetExportedTypes())
             .Where(t => t is { IsClass: true, IsAbstract: false } && typeof(IRule).IsAssignableFrom(t) && t.GetConstructor(Type.EmptyTypes) is not null)
-            .Select(t => (IRule)Activator.CreateInstance(t)!)
-            .OrderBy(r => r.Descriptor.Id, StringComparer.Ordinal)
-            .ToImmutableArray();
-        var duplicate = rules.GroupBy(r => r.Descriptor.Id, StringComparer.Ordinal).FirstOrDefault(g => g.Count() > 1);
+            .Select(t => (IRule)Activator.CreateInstance(t)!));
+
+    /// <summary>A catalog of <paramref name="rules"/>, ordered by id; throws when two rules share an id.</summary>
+    private static RuleCatalog Of(IEnumerable<IRule> rules)
+    {
+        var sorted = rules.OrderBy(r => r.Descriptor.Id, StringComparer.Ordinal).ToImmutableArray();
+        var duplicate = sorted.GroupBy(r => r.Descriptor.Id, StringComparer.Ordinal).FirstOrDefault(g => g.Count() > 1);
         if (duplicate is not null)
         {
             throw new InvalidOperationException($"two rules share the id '{duplicate.Key}': {string.Join(", ", duplicate.Select(r => r.GetType().FullName))}");
         }
 
-        return new RuleCatalog(rules);
+        return new RuleCatalog(sorted);
     }
 
     /// <summary>This catalog plus more rules (house rules); ids must stay unique.</summary>

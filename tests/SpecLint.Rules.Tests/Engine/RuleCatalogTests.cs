@@ -19,6 +19,17 @@ public sealed class RuleCatalogTests
     }
 
     [Fact]
+    public void The_hand_kept_list_holds_every_rule_class_once()
+    {
+        // BuiltInRules spares the start-up a scan of every exported type; reflection here keeps it complete.
+        var discovered = RuleCatalog.Discover(typeof(RuleCatalog).Assembly).Rules.Select(r => r.GetType()).ToList();
+        var listed = BuiltInRules.Create().Select(r => r.GetType()).ToList();
+
+        Assert.Equal(listed.Count, listed.Distinct().Count());
+        Assert.Equal(discovered.OrderBy(t => t.FullName, StringComparer.Ordinal), listed.OrderBy(t => t.FullName, StringComparer.Ordinal));
+    }
+
+    [Fact]
     public void Every_rule_is_public_and_sealed()
     {
         Assert.All(RuleCatalog.BuiltIn.Rules, r => Assert.True(r.GetType().IsPublic && r.GetType().IsSealed, r.GetType().Name));

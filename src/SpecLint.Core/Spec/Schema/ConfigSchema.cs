@@ -8,6 +8,9 @@ internal static class ConfigSchema
 {
     private static readonly Lazy<SchemaValidator> Validator = new(() => new SchemaValidator("config.schema.json"));
 
+    /// <summary>The validator itself (tests compare its quick check with the schema library).</summary>
+    internal static SchemaValidator Shared => Validator.Value;
+
     /// <summary>The schema text.</summary>
     public static string Text => Validator.Value.Text;
 

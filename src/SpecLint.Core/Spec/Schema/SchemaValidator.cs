@@ -4,6 +4,7 @@ using System.Text.Json;
 using System.Text.Json.Nodes;
 using System.Text.RegularExpressions;
 using Json.Schema;
+using SpecLint.Core.Spec.Schema.Quick;
 using SpecLint.Core.Spec.Yaml;
 
 namespace SpecLint.Core.Spec.Schema;
@@ -14,8 +15,9 @@ namespace SpecLint.Core.Spec.Schema;
 /// </summary>
 internal sealed partial class SchemaValidator
 {
-    private readonly JsonSchema _schema;
-    private readonly JsonNode _schemaNode;
+    private readonly Lazy<JsonSchema> _schema;
+    private readonly Lazy<JsonNode> _schemaNodeLazy;
+    private readonly QuickSchema? _quick;
 
     // One validation at a time: the schema library's evaluation caches state on the shared schema, and the
     // parsed schema tree fills itself in on first read; specs checked in parallel share this validator.
@@ -24,9 +26,17 @@ internal sealed partial class SchemaValidator
     public SchemaValidator(string resourceFile)
     {
         Text = LoadResource(resourceFile);
-        _schemaNode = JsonNode.Parse(Text)!;
-        _schema = JsonSchema.FromText(Text);
+        _quick = QuickSchemaCompiler.Compile(Text);
+        // The library's validator and the schema tree that words errors are built on the first document that the
+        // quick check does not pass: a run of valid files never pays for them (most of a cold start's JIT).
+        _schemaNodeLazy = new(() => JsonNode.Parse(Text)!);
+        _schema = new(() => JsonSchema.FromText(Text));
     }
+
+    /// <summary>True when the schema compiled for the quick check (tests hold it to the library's verdicts).</summary>
+    internal bool HasQuickCheck => _quick is not null;
+
+    private JsonNode SchemaNode => _schemaNodeLazy.Value;
 
     public string Text { get; }
 
@@ -44,16 +54,36 @@ internal sealed partial class SchemaValidator
 
     public ImmutableArray<SchemaViolation> Validate(JsonNode? root)
     {
+        // Most files are valid, and the quick check proves that straight from the YAML tree, without the tree →
+        // JSON text → JSON document round trip and without the lock (it shares nothing mutable).
+        if (QuickAccepts(root))
+        {
+            return [];
+        }
+
         lock (_gate)
         {
             return ValidateAlone(root);
         }
     }
 
+    /// <summary>True when the quick check is sure that <paramref name="root"/> is valid; false means "ask the library".</summary>
+    internal bool QuickAccepts(JsonNode? root) => _quick?.Accepts(root) == true;
+
+    /// <summary>The schema library's verdict alone (tests compare it with the quick check's).</summary>
+    internal bool LibraryAccepts(JsonNode? root)
+    {
+        lock (_gate)
+        {
+            using var doc = JsonDocument.Parse(root?.ToJsonString() ?? "null");
+            return _schema.Value.Evaluate(doc.RootElement, new EvaluationOptions { OutputFormat = OutputFormat.Flag }).IsValid;
+        }
+    }
+
     private ImmutableArray<SchemaViolation> ValidateAlone(JsonNode? root)
     {
         using var doc = JsonDocument.Parse(root?.ToJsonString() ?? "null");
-        var results = _schema.Evaluate(doc.RootElement, new EvaluationOptions { OutputFormat = OutputFormat.List });
+        var results = _schema.Value.Evaluate(doc.RootElement, new EvaluationOptions { OutputFormat = OutputFormat.List });
         if (results.IsValid)
         {
             return [];
@@ -283,7 +313,7 @@ internal sealed partial class SchemaValidator
 
     private JsonNode? Resolve(string schemaPointer)
     {
-        JsonNode? node = _schemaNode;
+        JsonNode? node = SchemaNode;
         foreach (var token in JsonPointerText.Split(schemaPointer))
         {
             node = node switch
@@ -300,7 +330,7 @@ internal sealed partial class SchemaValidator
     /// <summary>Follows an evaluation path (which walks through <c>$ref</c>) from the schema root.</summary>
     private JsonNode? ResolveEvaluationPath(string evaluationPath)
     {
-        JsonNode? node = _schemaNode;
+        JsonNode? node = SchemaNode;
         foreach (var token in JsonPointerText.Split(evaluationPath))
         {
             node = token == "$ref" && node?["$ref"]?.GetValue<string>() is { } r
@@ -319,7 +349,7 @@ internal sealed partial class SchemaValidator
     /// <summary>The schema written for an instance location (the one with its description), following properties, items and allOf/$ref.</summary>
     internal JsonNode? PropertySchema(string instancePointer)
     {
-        JsonNode? node = _schemaNode;
+        JsonNode? node = SchemaNode;
         foreach (var token in JsonPointerText.Split(instancePointer))
         {
             var s = Deref(node);

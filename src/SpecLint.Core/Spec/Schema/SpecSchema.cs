@@ -8,6 +8,9 @@ internal static class SpecSchema
 {
     private static readonly Lazy<SchemaValidator> Validator = new(() => new SchemaValidator("spec.schema.json"));
 
+    /// <summary>The validator itself (tests compare its quick check with the schema library).</summary>
+    internal static SchemaValidator Shared => Validator.Value;
+
     /// <summary>The schema text, as exported to <c>schema/speclint.schema.json</c> for editors.</summary>
     public static string Text => Validator.Value.Text;
 
