@@ -1,3 +1,4 @@
+using System.Collections.Immutable;
 using SpecLint.Core.Spec.Model;
 using SpecLint.Core.Units;
 
@@ -98,8 +99,35 @@ public sealed record Circuit
     /// <summary>Sensor responsivity, or null; enables the noise-equivalent power.</summary>
     public Responsivity? Responsivity { get; init; }
 
+    /// <summary>
+    /// Resistance in series with the selected feedback branch (Rf ∥ Cf): a gain switch's on-resistance or a
+    /// potentiometer's wiper. Zero for a plain feedback pair.
+    /// </summary>
+    public Resistance FeedbackSeriesResistance { get; init; } = Resistance.Zero;
+
+    /// <summary>
+    /// The feedback branches of a switched-gain channel that are not selected: each still reaches the summing node
+    /// through its open switch's off-capacitance. Empty for a single-gain channel.
+    /// </summary>
+    public ImmutableArray<OffBranch> OffBranches { get; init; } = [];
+
+    /// <summary>
+    /// An electrode's access resistance, between the source (current source ∥ sensor capacitance ∥ Rsh) and the
+    /// summing node. Zero for a photodiode or an ideal current source.
+    /// </summary>
+    public Resistance SeriesResistance { get; init; } = Resistance.Zero;
+
+    /// <summary>True when the circuit has a switch, a wiper, unselected branches or an access resistance.</summary>
+    public bool HasNetwork => FeedbackSeriesResistance.Ohms > 0 || !OffBranches.IsDefaultOrEmpty || SeriesResistance.Ohms > 0;
+
     /// <summary>Total capacitance from the inverting node to AC ground: sensor + common-mode + differential + stray.</summary>
     public Capacitance Cin => SensorCapacitance + CommonModeCapacitance + DifferentialCapacitance + StrayCapacitance;
+
+    /// <summary>The op-amp's and the board's capacitance at the inverting node, without the sensor's.</summary>
+    public Capacitance NodeCapacitance => CommonModeCapacitance + DifferentialCapacitance + StrayCapacitance;
+
+    /// <summary>The DC feedback resistance: Rf plus the switch's on-resistance or the wiper.</summary>
+    public Resistance DcFeedbackResistance => Rf + FeedbackSeriesResistance;
 
     /// <summary>Total capacitance across Rf, Cf + Cpar.</summary>
     public Capacitance FeedbackCapacitance => Cf + Cpar;

@@ -18,8 +18,15 @@ public readonly record struct NoiseDensities(
     double CurrentNoise,
     double VoltageNoise)
 {
+    /// <summary>
+    /// Thermal noise of the resistances a network adds, through their own transfers: a gain switch's on-resistance or
+    /// a wiper, the unselected feedback resistors (through their switches' off-capacitance) and an electrode's access
+    /// resistance. Zero for a plain Rf ∥ Cf channel.
+    /// </summary>
+    public double SeriesThermal { get; init; }
+
     /// <summary>The sum of all sources in V²/Hz.</summary>
-    public double Total => RfThermal + RshThermal + Shot + CurrentNoise + VoltageNoise;
+    public double Total => RfThermal + RshThermal + Shot + CurrentNoise + VoltageNoise + SeriesThermal;
 
     /// <summary>Converts a PSD in V²/Hz to a density in V/√Hz.</summary>
     /// <param name="psdVoltsSquaredPerHertz">A member of this record.</param>

@@ -41,6 +41,7 @@ internal static class NoiseIntegrator
         var coarse = Math.Log(10) / panelsPerDecade;
         var resonances = ClosedLoopPoles.Resonances(model);
         var sums = new Sums();
+        var network = new NetworkSums();
         var u = uLo;
         while (u < uHi)
         {
@@ -54,8 +55,21 @@ internal static class NoiseIntegrator
                 }
             }
 
-            Panels(model, u, next, next - u, ref sums);
+            if (model.Network is null)
+            {
+                Panels(model, u, next, next - u, ref sums);
+            }
+            else
+            {
+                NetworkPanels(model, u, next, next - u, ref network);
+            }
+
             u = next;
+        }
+
+        if (model.Network is not null)
+        {
+            return new NoiseDensities(network.Rf, network.Rsh, network.Shot, network.In, network.En) { SeriesThermal = network.Series };
         }
 
         return new NoiseDensities(
@@ -111,6 +125,48 @@ internal static class NoiseIntegrator
         sums.ZtOverF += ztOverF * half;
         sums.Ng += ng * half;
         sums.NgOverF += ngOverF * half;
+    }
+
+    /// <summary>
+    /// As <see cref="Panels"/> for a network circuit, where each source has its own transfer: every source's
+    /// output PSD (1/f parts included) is integrated on its own.
+    /// </summary>
+    private static void NetworkPanels(TiaModel model, double a, double b, double maxWidth, ref NetworkSums sums)
+    {
+        if (!(b > a))
+        {
+            return;
+        }
+
+        var panels = (int)Math.Clamp(Math.Ceiling((b - a) / maxWidth), 1, MaxPanels);
+        var h = (b - a) / panels;
+        var half = h / 2;
+        for (var p = 0; p < panels; p++)
+        {
+            var mid = a + ((p + 0.5) * h);
+            for (var k = 0; k < Order; k++)
+            {
+                var f = Math.Exp(mid + (half * Nodes[k]));
+                var d = model.OutputNoise(new Units.Frequency(f));
+                var w = Weights[k] * f * half;
+                sums.Rf += w * d.RfThermal;
+                sums.Rsh += w * d.RshThermal;
+                sums.Shot += w * d.Shot;
+                sums.In += w * d.CurrentNoise;
+                sums.En += w * d.VoltageNoise;
+                sums.Series += w * d.SeriesThermal;
+            }
+        }
+    }
+
+    private struct NetworkSums
+    {
+        public double Rf;
+        public double Rsh;
+        public double Shot;
+        public double In;
+        public double En;
+        public double Series;
     }
 
     private struct Sums

@@ -10,9 +10,12 @@ namespace SpecLint.Core.Analysis;
 /// <param name="VoltageNoise">Op-amp voltage noise through the noise gain, 1/f part included.</param>
 public sealed record NoiseRms(Voltage RfThermal, Voltage RshThermal, Voltage Shot, Voltage CurrentNoise, Voltage VoltageNoise)
 {
+    /// <summary>Thermal noise of a switch, wiper, unselected branches or access resistance (zero for a plain channel).</summary>
+    public Voltage SeriesThermal { get; init; }
+
     /// <summary>The root-sum-square of all sources.</summary>
     public Voltage Total => new(Math.Sqrt(
-        Sq(RfThermal) + Sq(RshThermal) + Sq(Shot) + Sq(CurrentNoise) + Sq(VoltageNoise)));
+        Sq(RfThermal) + Sq(RshThermal) + Sq(Shot) + Sq(CurrentNoise) + Sq(VoltageNoise) + Sq(SeriesThermal)));
 
     private static double Sq(Voltage v) => v.Volts * v.Volts;
 }

@@ -54,9 +54,12 @@ public static class TiaAnalyzer
         var model = new TiaModel(circuit, noiseTemperature);
 
         var rf = circuit.Rf.Ohms;
-        var gsh = circuit.Rsh is { } rsh ? 1 / rsh.Ohms : 0;
+        // DC figures see Rf plus any switch or wiper in series, and the sensor's shunt plus any access resistance.
+        var rdc = circuit.DcFeedbackResistance.Ohms;
+        var gsh = DcShuntConductance(circuit);
         var cfb = circuit.FeedbackCapacitance.Farads;
         var cin = circuit.Cin.Farads;
+        var cfbHigh = cfb + HighFrequencyOffCapacitance(circuit);
         var zt0 = Math.Sqrt(model.TransimpedanceMagnitudeSquared(0));
 
         var scan = Scan(model, zt0, options.ScanPointsPerDecade);
@@ -79,15 +82,15 @@ public static class TiaAnalyzer
         return new AnalysisResult(
             circuit,
             new Resistance(zt0),
-            circuit.A0.Linear / (1 + (rf * gsh)),
+            circuit.A0.Linear / (1 + (rdc * gsh)),
             scan.BandwidthHz is { } bw ? new Frequency(bw) : null,
             scan.PeakingDb,
             scan.PeakHz is { } pk ? new Frequency(pk) : null,
             pm,
             crossover,
             scan.Crossings,
-            1 + (rf * gsh),
-            cfb > 0 ? 1 + (cin / cfb) : double.PositiveInfinity,
+            1 + (rdc * gsh),
+            cfbHigh > 0 ? 1 + (cin / cfbHigh) : double.PositiveInfinity,
             cfb > 0 ? new Frequency(1 / (2 * Math.PI * rf * cfb)) : null,
             cin + cfb > 0 ? new Frequency(((1 / rf) + gsh) / (2 * Math.PI * (cin + cfb))) : null,
             DcOutput(circuit),
@@ -232,23 +235,54 @@ public static class TiaAnalyzer
     public static Voltage ExactDcOutput(Circuit circuit, double outOfNodeAmperes, double vosVolts, double ibAmperes)
     {
         ArgumentNullException.ThrowIfNull(circuit);
-        var gf = 1 / circuit.Rf.Ohms;
-        var gsh = circuit.Rsh is { } rsh ? 1 / rsh.Ohms : 0;
+        var gf = 1 / circuit.DcFeedbackResistance.Ohms;
+        var gsh = DcShuntConductance(circuit);
         var invA0 = 1 / circuit.A0.Linear;
         var vp = circuit.Vbias.Volts + vosVolts;
-        var num = (vp * gf) + (vosVolts * gsh) + ibAmperes + outOfNodeAmperes;
+        var num = (vp * gf) + (vosVolts * gsh) + ibAmperes + (outOfNodeAmperes * DcSignalShare(circuit));
         return new Voltage(num / ((gf * (1 + invA0)) + (gsh * invA0)));
+    }
+
+    /// <summary>
+    /// The sensor branch's DC conductance at the node: 1/(Rsh + Rs), zero when Rsh is infinite (references.md §D7).
+    /// </summary>
+    internal static double DcShuntConductance(Circuit c) =>
+        c.Rsh is { } rsh ? 1 / (rsh.Ohms + c.SeriesResistance.Ohms) : 0;
+
+    /// <summary>The share of the source's DC current that reaches the node past Rsh: Rsh/(Rsh + Rs).</summary>
+    internal static double DcSignalShare(Circuit c) =>
+        c.Rsh is { } rsh && c.SeriesResistance.Ohms > 0 ? rsh.Ohms / (rsh.Ohms + c.SeriesResistance.Ohms) : 1;
+
+    /// <summary>What the unselected branches add across the feedback at high frequency: each Coff in series with C_k.</summary>
+    private static double HighFrequencyOffCapacitance(Circuit c)
+    {
+        var sum = 0.0;
+        if (c.OffBranches.IsDefaultOrEmpty)
+        {
+            return sum;
+        }
+
+        // A branch without capacitance looks like its resistor at high frequency and adds none.
+        foreach (var b in c.OffBranches)
+        {
+            var ck = b.Capacitance.Farads;
+            var c0 = b.OffCapacitance.Farads;
+            sum += ck > 0 ? c0 * ck / (c0 + ck) : 0;
+        }
+
+        return sum;
     }
 
     private static OutputRange DcOutput(Circuit c)
     {
-        var rf = c.Rf.Ohms;
+        var rf = c.DcFeedbackResistance.Ohms;
         var pol = c.Polarity;
+        var share = DcSignalShare(c);
         var idleCurrent = pol * c.Idark.Amperes;
         var fullCurrent = pol * (c.Imax.Amperes + c.Idark.Amperes);
-        var idle = c.Vbias.Volts + (idleCurrent * rf);
-        var full = c.Vbias.Volts + (fullCurrent * rf);
-        var rfOverRsh = c.Rsh is { } rsh ? rf / rsh.Ohms : 0;
+        var idle = c.Vbias.Volts + (idleCurrent * share * rf);
+        var full = c.Vbias.Volts + (fullCurrent * share * rf);
+        var rfOverRsh = rf * DcShuntConductance(c);
         var vos = Math.Abs(c.Vos.Volts);
         var ib = Math.Abs(c.Ib.Amperes);
         var err = (vos * (1 + rfOverRsh)) + (ib * rf);
@@ -475,7 +509,10 @@ public static class TiaAnalyzer
             new Voltage(Math.Sqrt(v2.RshThermal)),
             new Voltage(Math.Sqrt(v2.Shot)),
             new Voltage(Math.Sqrt(v2.CurrentNoise)),
-            new Voltage(Math.Sqrt(v2.VoltageNoise)));
+            new Voltage(Math.Sqrt(v2.VoltageNoise)))
+        {
+            SeriesThermal = new Voltage(Math.Sqrt(v2.SeriesThermal)),
+        };
         var total = Math.Sqrt(v2.Total);
         var input = total / zt0;
         var imin = Math.Abs(c.Imin.Amperes);

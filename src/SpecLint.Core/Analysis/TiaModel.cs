@@ -33,6 +33,9 @@ public sealed class TiaModel
     private readonly double _rshThermalPsd;
     private readonly double _shotPsd;
 
+    // Set only for a circuit with a switch, wiper, unselected branches or an access resistance (see TiaNetwork).
+    private readonly TiaNetwork? _network;
+
     /// <summary>Prepares the model of <paramref name="circuit"/>, with noise at the circuit's temperature.</summary>
     /// <param name="circuit">The operating point.</param>
     public TiaModel(Circuit circuit)
@@ -81,6 +84,10 @@ public sealed class TiaModel
         _enCornerHz = circuit.EnCorner.Hertz;
         _currentPsdWhite = _rfThermalPsd + _rshThermalPsd + _shotPsd;
         NoiseTemperature = noiseTemperature;
+        if (circuit.HasNetwork)
+        {
+            _network = new TiaNetwork(circuit, kT4);
+        }
     }
 
     /// <summary>The operating point this model was built from.</summary>
@@ -98,6 +105,11 @@ public sealed class TiaModel
     public Complex FeedbackFactor(Frequency frequency)
     {
         var w = TwoPi * frequency.Hertz;
+        if (_network is { } n)
+        {
+            return n.Feedback.AtOmega(w) / n.Sum.AtOmega(w);
+        }
+
         var yf = new Complex(_gfSiemens, w * _cfbFarads);
         return yf / (yf + new Complex(_gshSiemens, w * _cinFarads));
     }
@@ -122,6 +134,11 @@ public sealed class TiaModel
     public Complex NoiseGain(Frequency frequency)
     {
         var w = TwoPi * frequency.Hertz;
+        if (_network is { } n)
+        {
+            return n.Sum.AtOmega(w) / n.Denominator(w, InverseA(w));
+        }
+
         return new Complex(_gfSiemens + _gshSiemens, w * (_cfbFarads + _cinFarads)) * TransimpedanceAt(w);
     }
 
@@ -131,6 +148,11 @@ public sealed class TiaModel
     {
         var f = frequency.Hertz;
         var w = TwoPi * f;
+        if (_network is { } n)
+        {
+            return n.OutputNoise(w, InverseA(w), _inPsd * (1 + (_inCornerHz / f)), _enPsd * (1 + (_enCornerHz / f)), _shotPsd);
+        }
+
         var zt = TransimpedanceAt(w);
         var zt2 = (zt.Real * zt.Real) + (zt.Imaginary * zt.Imaginary);
         var gSum = _gfSiemens + _gshSiemens;
@@ -160,6 +182,14 @@ public sealed class TiaModel
 
         var wt = 1 / _invWtSeconds;
         Take(wt);
+        if (_network is { } n)
+        {
+            foreach (var x in n.CharacteristicOmegas())
+            {
+                Take(x);
+            }
+        }
+
         Take(wt * _invA0);
         if (_invWp2Seconds > 0)
         {
@@ -186,6 +216,11 @@ public sealed class TiaModel
     /// </summary>
     internal double[] DenominatorCoefficients()
     {
+        if (_network is { } n)
+        {
+            return n.DenominatorCoefficients(_invA0, _invWtSeconds, _invWp2Seconds);
+        }
+
         var a0 = _invA0;
         var tt = _invWtSeconds;
         var t2 = _invWp2Seconds;
@@ -211,6 +246,11 @@ public sealed class TiaModel
 
     internal Complex LoopGainAt(double w)
     {
+        if (_network is { } n)
+        {
+            return n.Feedback.AtOmega(w) / (n.Sum.AtOmega(w) * InverseA(w));
+        }
+
         var yf = new Complex(_gfSiemens, w * _cfbFarads);
         var ysum = new Complex(_gfSiemens + _gshSiemens, w * (_cfbFarads + _cinFarads));
         return yf / (ysum * InverseA(w));
@@ -222,6 +262,12 @@ public sealed class TiaModel
     /// <summary>|T(jω)|², with real arithmetic only; half its logarithm is <see cref="LogLoopGainMagnitude"/> to the last bit.</summary>
     internal double LoopGainMagnitudeSquared(double w)
     {
+        if (_network is { } n)
+        {
+            var ia = InverseA(w);
+            return n.Feedback.AtOmega(w).MagnitudeSquared() / (n.Sum.AtOmega(w).MagnitudeSquared() * ia.MagnitudeSquared());
+        }
+
         var b = w * _invWtSeconds;
         var c = w * _invWp2Seconds;
         var invA2 = ((_invA0 * _invA0) + (b * b)) * (1 + (c * c));
@@ -246,10 +292,18 @@ public sealed class TiaModel
             return wb * wb / ((a * a) + (wb * wb));
         }
 
+        double OpAmp(double w) => Slope(w, _invA0, _invWtSeconds) + Slope(w, 1, _invWp2Seconds);
+
+        if (_network is { } n)
+        {
+            // T = A·Nf·Di/Ns: rising terms are Yf's zeros and Yin's poles, falling ones Ysum's zeros (references.md §D7).
+            return (
+                n.RisingSlope(wLo) - n.FallingSlope(wHi) - OpAmp(wHi),
+                n.RisingSlope(wHi) - n.FallingSlope(wLo) - OpAmp(wLo));
+        }
+
         double Falling(double w) =>
-            Slope(w, _gfSiemens + _gshSiemens, _cfbFarads + _cinFarads)
-            + Slope(w, _invA0, _invWtSeconds)
-            + Slope(w, 1, _invWp2Seconds);
+            Slope(w, _gfSiemens + _gshSiemens, _cfbFarads + _cinFarads) + OpAmp(w);
 
         return (
             Slope(wLo, _gfSiemens, _cfbFarads) - Falling(wHi),
@@ -257,13 +311,20 @@ public sealed class TiaModel
     }
 
     internal double LoopGainPhaseRadians(double w) =>
-        Math.Atan(w * _cfbFarads / _gfSiemens)
+        _network is { } n
+            ? n.FeedbackPhase(w) - Math.Atan2(w * _invWtSeconds, _invA0) - Math.Atan(w * _invWp2Seconds)
+            : Math.Atan(w * _cfbFarads / _gfSiemens)
         - Math.Atan(w * (_cfbFarads + _cinFarads) / (_gfSiemens + _gshSiemens))
         - Math.Atan2(w * _invWtSeconds, _invA0)
         - Math.Atan(w * _invWp2Seconds);
 
     internal Complex TransimpedanceAt(double w)
     {
+        if (_network is { } n)
+        {
+            return n.SignalTransfer(w) / n.Denominator(w, InverseA(w));
+        }
+
         var yf = new Complex(_gfSiemens, w * _cfbFarads);
         var ysum = new Complex(_gfSiemens + _gshSiemens, w * (_cfbFarads + _cinFarads));
         return 1 / (yf + (ysum * InverseA(w)));
@@ -273,6 +334,11 @@ public sealed class TiaModel
     internal double TransimpedanceMagnitudeSquared(double w)
     {
         var ia = InverseA(w);
+        if (_network is { } n)
+        {
+            return n.SignalTransfer(w).MagnitudeSquared() / n.Denominator(w, ia).MagnitudeSquared();
+        }
+
         var sr = _gfSiemens + _gshSiemens;
         var si = w * (_cfbFarads + _cinFarads);
         var dr = _gfSiemens + (sr * ia.Real) - (si * ia.Imaginary);
@@ -292,6 +358,9 @@ public sealed class TiaModel
         var wc = w * (_cfbFarads + _cinFarads);
         ng2 = zt2 * ((gSum * gSum) + (wc * wc));
     }
+
+    /// <summary>The network model of a switched, adjustable or electrode circuit; null for a plain one.</summary>
+    internal TiaNetwork? Network => _network;
 
     internal double RfThermalPsd => _rfThermalPsd;
 

@@ -37,7 +37,7 @@ internal static class NetlistWriter
         // z: transimpedance.
         Core(sb, c, "z", plus: "pbz", node: "nz", output: "oz");
         sb.AppendLine("Vbz pbz 0 DC 0");
-        sb.AppendLine("Iacz 0 nz DC 0 AC 1");
+        sb.AppendLine($"Iacz 0 {Source(c, "z", "nz")} DC 0 AC 1");
 
         // t: loop gain with the loop broken at the ideal op-amp output.
         Feedback(sb, c, "t", node: "nt", output: "ot", farEnd: "0");
@@ -51,7 +51,7 @@ internal static class NetlistWriter
         var unit = Math.Sqrt(2 * Q * DiodeAmperes);
         var shot = Math.Abs(c.Imin.Amperes + c.Idark.Amperes);
         NoiseDiode(sb, "sh", 0);
-        sb.AppendLine($"Fsh 0 nn Vssh {F(Math.Sqrt(shot / DiodeAmperes))}");
+        sb.AppendLine($"Fsh 0 {Source(c, "n", "nn")} Vssh {F(Math.Sqrt(shot / DiodeAmperes))}");
         NoiseDiode(sb, "in", c.InCorner.Hertz);
         sb.AppendLine($"Fin 0 nn Vsin {F(c.In.AmperesPerRootHertz / unit)}");
         NoiseDiode(sb, "en", c.EnCorner.Hertz);
@@ -71,7 +71,7 @@ internal static class NetlistWriter
                     sb.AppendLine($"Vb{s} b{s} 0 DC {F(c.Vbias.Volts)}");
                     sb.AppendLine($"Vos{s} p{s} b{s} DC {F(vos)}");
                     // Current sources pull their value out of the first node: the signal and Ib leave the node.
-                    sb.AppendLine($"Isig{s} n{s} 0 DC {F(current)}");
+                    sb.AppendLine($"Isig{s} {Source(c, s, $"n{s}")} 0 DC {F(current)}");
                     sb.AppendLine($"Ib{s} n{s} 0 DC {F(ib)}");
                     k++;
                 }
@@ -102,25 +102,66 @@ internal static class NetlistWriter
         Amplifier(sb, c, s, plus, node, output);
     }
 
-    /// <summary>Rf ∥ (Cf + Cpar), Cin to ground and Rsh to the sensor's far end (Vbias).</summary>
+    /// <summary>
+    /// Rf ∥ (Cf + Cpar) (behind the switch's on-resistance when there is one), each unselected branch behind its
+    /// off-capacitance, Cin to ground and Rsh to the sensor's far end (Vbias); an electrode's Cd and Rsh sit behind
+    /// its access resistance.
+    /// </summary>
     private static void Feedback(StringBuilder sb, Circuit c, string s, string node, string output, string farEnd)
     {
-        sb.AppendLine($"Rf{s} {node} {output} {F(c.Rf.Ohms)}");
-        if (c.FeedbackCapacitance.Farads > 0)
+        var top = node;
+        if (c.FeedbackSeriesResistance.Ohms > 0)
         {
-            sb.AppendLine($"Cf{s} {node} {output} {F(c.FeedbackCapacitance.Farads)}");
+            top = $"m{s}";
+            sb.AppendLine($"Ron{s} {node} {top} {F(c.FeedbackSeriesResistance.Ohms)}");
         }
 
-        if (c.Cin.Farads > 0)
+        sb.AppendLine($"Rf{s} {top} {output} {F(c.Rf.Ohms)}");
+        if (c.FeedbackCapacitance.Farads > 0)
+        {
+            sb.AppendLine($"Cf{s} {top} {output} {F(c.FeedbackCapacitance.Farads)}");
+        }
+
+        var k = 0;
+        foreach (var b in c.OffBranches)
+        {
+            sb.AppendLine($"Coff{k}{s} {node} k{k}{s} {F(b.OffCapacitance.Farads)}");
+            sb.AppendLine($"Rk{k}{s} k{k}{s} {output} {F(b.Rf.Ohms)}");
+            if (b.Capacitance.Farads > 0)
+            {
+                sb.AppendLine($"Ck{k}{s} k{k}{s} {output} {F(b.Capacitance.Farads)}");
+            }
+
+            k++;
+        }
+
+        var sensor = Source(c, s, node);
+        if (sensor != node)
+        {
+            sb.AppendLine($"Rs{s} {sensor} {node} {F(c.SeriesResistance.Ohms)}");
+            if (c.NodeCapacitance.Farads > 0)
+            {
+                sb.AppendLine($"Cn{s} {node} 0 {F(c.NodeCapacitance.Farads)}");
+            }
+
+            if (c.SensorCapacitance.Farads > 0)
+            {
+                sb.AppendLine($"Cd{s} {sensor} 0 {F(c.SensorCapacitance.Farads)}");
+            }
+        }
+        else if (c.Cin.Farads > 0)
         {
             sb.AppendLine($"Cin{s} {node} 0 {F(c.Cin.Farads)}");
         }
 
         if (c.Rsh is { } rsh)
         {
-            sb.AppendLine($"Rsh{s} {node} {farEnd} {F(rsh.Ohms)}");
+            sb.AppendLine($"Rsh{s} {sensor} {farEnd} {F(rsh.Ohms)}");
         }
     }
+
+    /// <summary>Where the source current enters: the node itself, or an electrode's far side of its access resistance.</summary>
+    private static string Source(Circuit c, string s, string node) => c.SeriesResistance.Ohms > 0 ? $"e{s}" : node;
 
     /// <summary>gm = 1 into A0 ∥ 1/(2π·GBW), an optional second pole stage, then a unity VCVS.</summary>
     private static void Amplifier(StringBuilder sb, Circuit c, string s, string plus, string minus, string output)

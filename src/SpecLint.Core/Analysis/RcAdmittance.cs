@@ -1,0 +1,185 @@
+using System.Numerics;
+
+namespace SpecLint.Core.Analysis;
+
+/// <summary>
+/// A sum of <see cref="RcBranch"/>es in parallel: an RC driving-point admittance. Its poles are the branches' poles;
+/// its zeros are found from the RC property (references.md §D7): on the negative real axis Y(−σ) falls strictly
+/// between consecutive poles, from +∞ after one to −∞ before the next, so each gap holds exactly one zero, as does
+/// [0, first pole) (at 0 when Y(0) = 0) and, when Y grows like s, the part above the last pole.
+/// </summary>
+internal sealed class RcAdmittance
+{
+    private readonly RcBranch[] _branches;
+
+    public RcAdmittance(IEnumerable<RcBranch> branches)
+    {
+        _branches = [.. branches.Where(b => b.G > 0 || b.C > 0)];
+        Poles = [.. _branches.Select(b => b.Pole).OfType<double>().Order()];
+        Zeros = FindZeros();
+    }
+
+    /// <summary>The branches.</summary>
+    public IReadOnlyList<RcBranch> Branches => _branches;
+
+    /// <summary>Poles as σ &gt; 0 (Y → ∞ at s = −σ), ascending.</summary>
+    public double[] Poles { get; }
+
+    /// <summary>Zeros as σ ≥ 0 (Y = 0 at s = −σ), ascending; a pole that two branches share also holds a zero.</summary>
+    public double[] Zeros { get; }
+
+    /// <summary>Y(jω).</summary>
+    public Complex AtOmega(double w)
+    {
+        var s = new Complex(0, w);
+        Complex sum = 0;
+        foreach (var b in _branches)
+        {
+            sum += b.At(s);
+        }
+
+        return sum;
+    }
+
+    /// <summary>Y(s) at any complex frequency.</summary>
+    public Complex At(Complex s)
+    {
+        Complex sum = 0;
+        foreach (var b in _branches)
+        {
+            sum += b.At(s);
+        }
+
+        return sum;
+    }
+
+    /// <summary>Y(0).</summary>
+    public double Dc => _branches.Sum(b => b.Dc);
+
+    /// <summary>Numerator and common denominator of Y(s), ascending powers of s.</summary>
+    public (double[] Num, double[] Den) Polynomials()
+    {
+        double[] num = [0];
+        double[] den = [1];
+        foreach (var b in _branches)
+        {
+            var (n, d) = b.Polynomials();
+            num = Polynomial.Add(Polynomial.Multiply(num, d), Polynomial.Multiply(n, den));
+            den = Polynomial.Multiply(den, d);
+        }
+
+        return (num, den);
+    }
+
+    private double OnAxis(double sigma)
+    {
+        var sum = 0.0;
+        foreach (var b in _branches)
+        {
+            sum += b.OnNegativeAxis(sigma);
+        }
+
+        return sum;
+    }
+
+    private double[] FindZeros()
+    {
+        var zeros = new List<double>();
+        var lower = 0.0;
+        var dc = Dc;
+        for (var i = 0; i <= Poles.Length; i++)
+        {
+            var upper = i < Poles.Length ? Poles[i] : double.PositiveInfinity;
+            if (i == 0 && dc <= 0)
+            {
+                zeros.Add(0);
+            }
+            else if (i < Poles.Length)
+            {
+                zeros.Add(ZeroBetween(i == 0 ? 0 : lower, upper));
+            }
+            else if (_branches.Any(b => b.GrowsAtInfinity))
+            {
+                zeros.Add(ZeroAbove(lower));
+            }
+
+            lower = upper;
+        }
+
+        return [.. zeros];
+    }
+
+    /// <summary>The single zero in (a, b) where Y(−σ) falls from above 0 to below it; bisection in ln σ.</summary>
+    private double ZeroBetween(double a, double b)
+    {
+        // Two branches sharing a pole: the zero between them sits on it.
+        if (a > 0 && b <= a * (1 + 1e-12))
+        {
+            return a;
+        }
+
+        var lo = a > 0 ? a * (1 + 1e-13) : 0;
+        var hi = b * (1 - 1e-13);
+        if (OnAxis(hi) >= 0)
+        {
+            return hi;
+        }
+
+        if (lo > 0 && OnAxis(lo) <= 0)
+        {
+            return lo;
+        }
+
+        if (lo == 0)
+        {
+            // Y(0) > 0: step down from the pole by decades until Y is positive, then bisect.
+            lo = hi;
+            while (OnAxis(lo) < 0 && lo > 1e-30)
+            {
+                lo /= 10;
+            }
+        }
+
+        return Bisect(lo, hi);
+    }
+
+    private double ZeroAbove(double a)
+    {
+        var lo = a > 0 ? a * (1 + 1e-13) : 1;
+        if (a <= 0)
+        {
+            // No pole at all: Y = G + sC, one zero at G/C (bracketed by decades from 1 rad/s).
+            while (OnAxis(lo) < 0 && lo > 1e-30)
+            {
+                lo /= 10;
+            }
+        }
+
+        var hi = lo * 10;
+        while (OnAxis(hi) > 0 && hi < 1e30)
+        {
+            lo = hi;
+            hi *= 10;
+        }
+
+        return Bisect(lo, hi);
+    }
+
+    private double Bisect(double lo, double hi)
+    {
+        for (var k = 0; k < 200 && hi > lo * (1 + 4e-16); k++)
+        {
+            var mid = Math.Sqrt(lo * hi);
+            if (OnAxis(mid) > 0)
+            {
+                lo = mid;
+            }
+            else
+            {
+                hi = mid;
+            }
+        }
+
+        return Math.Sqrt(lo * hi);
+    }
+}
