@@ -100,6 +100,7 @@ internal static class CheckCommand
             if (part is not null)
             {
                 options = options with { Select = part.Contains };
+                request = request with { ShardData = true };
             }
 
             ImmutableArray<AcceptedEntry>? acceptedEntries = null;

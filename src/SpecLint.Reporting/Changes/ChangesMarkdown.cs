@@ -1,8 +1,8 @@
 using System.Globalization;
 using SpecLint.Reporting.Markdown;
+using SpecLint.Reporting.Model;
 using SpecLint.Reporting.Plots;
 using SpecLint.Rules.Changes;
-using SpecLint.Rules.Checking;
 
 namespace SpecLint.Reporting.Changes;
 
@@ -12,7 +12,7 @@ internal static class ChangesMarkdown
     public const string Heading = "## What this change does";
 
     /// <summary>The section's lines; <paramref name="extras"/> holds the base-and-head charts by <see cref="ChangePlots.LinkKey"/>.</summary>
-    public static IEnumerable<string> Lines(CheckRun run, IReadOnlyDictionary<string, string>? extras = null)
+    public static IEnumerable<string> Lines(ReportData run, IReadOnlyDictionary<string, string>? extras = null)
     {
         ArgumentNullException.ThrowIfNull(run);
         if (run.Changes is not { } changes)
@@ -24,7 +24,7 @@ internal static class ChangesMarkdown
         yield return "";
         var count = changes.Specs.Length;
         yield return string.Create(CultureInfo.InvariantCulture,
-            $"Compared with `{MarkdownText.Cell(changes.Ref)}` (merge base `{changes.ShortBase}`): {count} spec{(count == 1 ? "" : "s")} changed{(changes.AllSpecs ? "; the configuration or the house rules changed, so every spec was re-checked" : "")}. Gate: {(run.Gate == Gate.New ? "only new findings fail the run" : "every finding in the changed specs counts")}.");
+            $"Compared with `{MarkdownText.Cell(changes.Ref)}` (merge base `{changes.ShortBase}`): {count} spec{(count == 1 ? "" : "s")} changed{(changes.AllSpecs ? "; the configuration or the house rules changed, so every spec was re-checked" : "")}. Gate: {(changes.Gate == Gate.New ? "only new findings fail the run" : "every finding in the changed specs counts")}.");
         yield return "";
         if (count == 0)
         {
@@ -37,11 +37,11 @@ internal static class ChangesMarkdown
         {
             var file = MarkdownText.Cell(c.File) + (c.PreviousFile is null ? "" : " (from " + MarkdownText.Cell(c.PreviousFile) + ")");
             yield return string.Create(CultureInfo.InvariantCulture,
-                $"| {MarkdownText.Cell(c.Name)}<br>{file} | {c.Status.Name()} | {c.Findings.New.Length} | {c.Findings.Resolved.Length} | {c.Findings.Unchanged.Length} |");
+                $"| {MarkdownText.Cell(c.Name)}<br>{file} | {c.Status.Name()} | {c.New.Length} | {c.Resolved.Length} | {c.Unchanged} |");
         }
 
         yield return "";
-        var deltas = changes.Specs.SelectMany(c => DeltaRows.For(c).Select(r => (c, r))).ToList();
+        var deltas = changes.Specs.SelectMany(c => c.Deltas.Select(r => (c, r))).ToList();
         if (deltas.Count > 0)
         {
             yield return "| Spec | Figure | Before | After | Change |";
@@ -57,19 +57,19 @@ internal static class ChangesMarkdown
         foreach (var c in changes.Specs)
         {
             var plots = extras?.GetValueOrDefault(ChangePlots.LinkKey(c.File));
-            if (c.Findings.New.Length + c.Findings.Resolved.Length + c.BaseProblems.Length == 0 && plots is null)
+            if (c.New.Length + c.Resolved.Length + c.BaseProblems.Length == 0 && plots is null)
             {
                 continue;
             }
 
             yield return $"**{MarkdownText.Cell(c.Name)}**";
             yield return "";
-            foreach (var f in c.Findings.New)
+            foreach (var f in c.New)
             {
                 yield return $"- new: `{f.RuleId}` at line {f.Line}: {MarkdownText.Cell(f.Message)}";
             }
 
-            foreach (var f in c.Findings.Resolved)
+            foreach (var f in c.Resolved)
             {
                 yield return $"- resolved: `{f.RuleId}`: {MarkdownText.Cell(f.Message)}";
             }

@@ -118,7 +118,7 @@ internal static class JsonMerge
         return [.. findings.OfType<JsonObject>().Select(f => f["accepted"]?.GetValue<bool>() == true ? Acceptance.AsSuppressed(ToFinding(f), acceptedFile) : ToFinding(f))];
     }
 
-    private static Finding ToFinding(JsonObject f)
+    internal static Finding ToFinding(JsonObject f)
     {
         SeverityNames.TryParse(f["severity"]?.GetValue<string>(), out var severity);
         var fix = f["fix"] is JsonObject x ? new FixSuggestion(x["path"]!.GetValue<string>(), x["value"]!.GetValue<string>()) : null;

@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Reflection;
 using System.Text;
 using SpecLint.Reporting.Changes;
+using SpecLint.Reporting.Model;
 using SpecLint.Rules.Checking;
 using SpecLint.Rules.Engine;
 
@@ -13,11 +14,11 @@ namespace SpecLint.Reporting.Markdown;
 /// </summary>
 internal sealed class MarkdownReport
 {
-    private readonly CheckRun _run;
+    private readonly ReportData _run;
     private readonly string _reportDirectory;
     private readonly StringBuilder _md = new();
 
-    private MarkdownReport(CheckRun run, string reportDirectory)
+    private MarkdownReport(ReportData run, string reportDirectory)
     {
         _run = run;
         _reportDirectory = reportDirectory;
@@ -34,7 +35,11 @@ internal sealed class MarkdownReport
         typeof(MarkdownReport).Assembly.GetCustomAttribute<AssemblyInformationalVersionAttribute>()?.InformationalVersion.Split('+')[0] ?? "0.0.0";
 
     /// <summary>Renders the report; links are relative to <paramref name="reportDirectory"/>.</summary>
-    public static string Render(CheckRun run, string reportDirectory, Options? options = null)
+    public static string Render(CheckRun run, string reportDirectory, Options? options = null) =>
+        Render(ReportData.From(run ?? throw new ArgumentNullException(nameof(run))), reportDirectory, options);
+
+    /// <summary>Renders the report of a run or of merged shards; links are relative to <paramref name="reportDirectory"/>.</summary>
+    public static string Render(ReportData run, string reportDirectory, Options? options = null)
     {
         ArgumentNullException.ThrowIfNull(run);
         var r = new MarkdownReport(run, Path.GetFullPath(reportDirectory));
@@ -55,7 +60,7 @@ internal sealed class MarkdownReport
         Summary();
         Findings();
         Waived();
-        foreach (var spec in _run.Specs.Where(s => s.Analysis is not null))
+        foreach (var spec in _run.Specs.Where(s => s.Section is not null))
         {
             SpecSection(spec, options);
         }
@@ -66,12 +71,11 @@ internal sealed class MarkdownReport
         var files = _run.Specs.Length;
         Line($"SpecLint {ToolVersion} checked {files} spec file{(files == 1 ? "" : "s")}; fail level `{_run.FailOn.Name()}`; " +
              (_run.ConfigFiles.IsEmpty ? "no `.speclint.yaml` (built-in defaults)." : "configuration " + string.Join(", ", _run.ConfigFiles.Select(c => $"`{Rel(c)}`")) + "."));
-        var houseRules = _run.Catalog.Rules.Select(r => r.Descriptor.Id).Where(_run.Catalog.IsHouseRule).ToList();
-        if (houseRules.Count > 0)
+        if (_run.HouseRules.Length > 0)
         {
             Line();
             Line("House rules of this repository ran beside the built-in rules: " +
-                 string.Join(", ", houseRules.Select(id => $"`{id}` ({Rel(_run.Catalog.HouseRuleSource(id)!)})")) + ".");
+                 string.Join(", ", _run.HouseRules.Select(h => $"`{h.Id}` ({Rel(h.Source)})")) + ".");
         }
 
         if (options.GeneratedAt is { } at)
@@ -101,23 +105,13 @@ internal sealed class MarkdownReport
         Line("|---|---|---:|---:|---:|---|---|");
         foreach (var s in _run.Specs)
         {
-            var a = s.Analysis;
-            var result = s.IsUnusable ? "unreadable" : s.WorstSeverity is { } w && w >= _run.FailOn ? "fail" : "pass";
-            var pm = a is null ? "–" : a.PhaseMargin is { } p ? MetricRows.Deg(p.Degrees) + Worst(s) : "undefined";
-            var bw = a?.Bandwidth is { } b ? MetricRows.Q(b.Hertz, Core.Units.Dimension.Frequency) : "–";
-            var noise = a?.Noise is { } n ? MetricRows.Q(n.InputRms.Amperes, Core.Units.Dimension.Current) : "–";
-            var range = a is null ? "–" : $"{MetricRows.Q(a.Output.Min.Volts, Core.Units.Dimension.Voltage)} .. {MetricRows.Q(a.Output.Max.Volts, Core.Units.Dimension.Voltage)}";
-            var counts = Counts(s);
-            Line($"| [{MarkdownText.Cell(s.Name)}]({MarkdownText.Target(Rel(s.File))}) | {result} | {pm} | {bw} | {noise} | {range} | {counts} |");
+            Line($"| [{MarkdownText.Cell(s.Name)}]({MarkdownText.Target(Rel(s.File))}) | {s.Result} | {s.PhaseMargin} | {s.Bandwidth} | {s.InputNoise} | {s.OutputRange} | {Counts(s)} |");
         }
 
         Line();
     }
 
-    private static string Worst(SpecOutcome s) =>
-        s.Tolerances?.PhaseMarginMin is { } m ? $" (worst {MetricRows.Deg(m.Degrees)})" : "";
-
-    private static string Counts(SpecOutcome s)
+    private static string Counts(ReportSpec s)
     {
         var live = s.Findings.Where(f => !f.Waived).ToList();
         if (live.Count == 0)
@@ -202,28 +196,25 @@ internal sealed class MarkdownReport
         Line($"- **{f.Severity.Name()}** `{f.RuleId}` at [{MarkdownText.Cell(LineLabel(f))}]({LineLink(f)}): {MarkdownText.Cell(f.Message)}{fix}");
     }
 
-    private void SpecSection(SpecOutcome s, Options options)
+    private void SpecSection(ReportSpec s, Options options)
     {
-        var a = s.Analysis!;
+        var section = s.Section!;
         Line($"## {MarkdownText.Cell(s.Name)}");
         Line();
-        var title = s.Spec?.Title is { Length: > 0 } t ? MarkdownText.Cell(t) + ". " : "";
-        Line($"{title}File [{MarkdownText.Cell(Rel(s.File))}]({MarkdownText.Target(Rel(s.File))}). Nominal values at {a.Circuit.Temperature.Celsius.ToString("0.#", CultureInfo.InvariantCulture)} °C; noise at the hottest temperature.");
+        var title = s.Title is { Length: > 0 } t ? MarkdownText.Cell(t) + ". " : "";
+        Line($"{title}File [{MarkdownText.Cell(Rel(s.File))}]({MarkdownText.Target(Rel(s.File))}). Nominal values at {section.Temperature} °C; noise at the hottest temperature.");
         Line();
         Line("| Metric | Value | Note |");
         Line("|---|---:|---|");
-        foreach (var (metric, value, note) in MetricRows.For(a))
+        foreach (var (metric, value, note) in section.Metrics)
         {
             Line($"| {metric} | {MarkdownText.Cell(value)} | {MarkdownText.Cell(note)} |");
         }
 
         Line();
-        if (s.Tolerances is { } tol)
+        foreach (var l in section.Corners)
         {
-            foreach (var l in CornerSection.Lines(tol))
-            {
-                Line(l);
-            }
+            Line(l);
         }
 
         if (options.Extras is not null && options.Extras.TryGetValue(s.File, out var extra))

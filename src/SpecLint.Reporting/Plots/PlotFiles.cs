@@ -1,6 +1,6 @@
 using System.Text;
 using SpecLint.Core.Files;
-using SpecLint.Rules.Checking;
+using SpecLint.Reporting.Model;
 
 namespace SpecLint.Reporting.Plots;
 
@@ -11,11 +11,11 @@ internal static class PlotFiles
     /// Writes <c>&lt;folder&gt;/&lt;spec&gt;.&lt;chart&gt;.svg</c> for each spec and returns per-spec Markdown, keyed by
     /// spec file. Specs that did not load have no charts.
     /// </summary>
-    public static IReadOnlyDictionary<string, string> Write(CheckRun run, string reportDirectory, string plotFolderName = "plots")
+    public static IReadOnlyDictionary<string, string> Write(ReportData data, string reportDirectory, string plotFolderName = "plots")
     {
-        ArgumentNullException.ThrowIfNull(run);
+        ArgumentNullException.ThrowIfNull(data);
         var folder = Path.Combine(reportDirectory, plotFolderName);
-        return Build(run, plotFolderName, (file, svg) =>
+        return Build(data, plotFolderName, (file, svg) =>
         {
             AtomicFile.CreateFolder(Path.Combine(plotFolderName, file), folder);
             AtomicFile.WriteAllText(Path.Combine(folder, file), svg);
@@ -23,49 +23,26 @@ internal static class PlotFiles
     }
 
     /// <summary>
-    /// Renders every chart and hands each SVG to <paramref name="sink"/> (file name, text) one at a time, so a
+    /// Draws every chart and hands each SVG to <paramref name="sink"/> (file name, text) one spec at a time, so a
     /// caller can write or inline it without all charts of a large run being held at once; returns the
     /// per-spec Markdown that links them under <paramref name="plotFolderName"/>.
     /// </summary>
-    public static IReadOnlyDictionary<string, string> Build(CheckRun run, string plotFolderName, Action<string, string> sink)
+    public static IReadOnlyDictionary<string, string> Build(ReportData data, string plotFolderName, Action<string, string> sink)
     {
-        ArgumentNullException.ThrowIfNull(run);
+        ArgumentNullException.ThrowIfNull(data);
         ArgumentNullException.ThrowIfNull(sink);
         var links = new Dictionary<string, string>(StringComparer.Ordinal);
-        foreach (var spec in run.Specs)
+        foreach (var spec in data.Specs.Where(s => s.Section is not null))
         {
-            if (spec.Analysis is not { } analysis)
-            {
-                continue;
-            }
-
-            var md = new StringBuilder();
-            foreach (var (suffix, chart) in SpecPlots.Build(analysis, spec.Name))
-            {
-                var file = $"{SafeName(spec.Name)}.{suffix}.svg";
-                sink(file, SvgChartWriter.Write(chart with { Id = SafeName(spec.Name) + "-" + suffix }));
-                md.Append("![").Append(chart.Title).Append("](").Append(plotFolderName).Append('/').Append(file).Append(")\n\n");
-            }
-
-            links[spec.File] = md.ToString();
+            links[spec.File] = Sink(spec.Charts(), spec.Name, plotFolderName, sink);
         }
 
-        foreach (var change in run.Changes?.Specs ?? [])
+        foreach (var change in data.Changes?.Specs ?? [])
         {
-            if (change.Before?.Analysis is not { } before || change.After?.Analysis is not { } after)
+            if (change.Charts() is { Count: > 0 } charts)
             {
-                continue;
+                links[ChangePlots.LinkKey(change.File)] = Sink(charts, change.Name, plotFolderName, sink);
             }
-
-            var md = new StringBuilder();
-            foreach (var (suffix, chart) in ChangePlots.Build(before, after, change.Name))
-            {
-                var file = $"{SafeName(change.Name)}.{suffix}.svg";
-                sink(file, SvgChartWriter.Write(chart with { Id = SafeName(change.Name) + "-" + suffix }));
-                md.Append("![").Append(chart.Title).Append("](").Append(plotFolderName).Append('/').Append(file).Append(")\n\n");
-            }
-
-            links[ChangePlots.LinkKey(change.File)] = md.ToString();
         }
 
         return links;
@@ -74,4 +51,17 @@ internal static class PlotFiles
     /// <summary>A file-name-safe form of a spec name.</summary>
     public static string SafeName(string name) =>
         new(name.Select(c => char.IsAsciiLetterOrDigit(c) || c is '-' or '_' ? c : '-').ToArray());
+
+    private static string Sink(IReadOnlyList<ReportChart> charts, string name, string plotFolderName, Action<string, string> sink)
+    {
+        var md = new StringBuilder();
+        foreach (var chart in charts)
+        {
+            var file = $"{SafeName(name)}.{chart.Suffix}.svg";
+            sink(file, chart.Svg);
+            md.Append("![").Append(chart.Title).Append("](").Append(plotFolderName).Append('/').Append(file).Append(")\n\n");
+        }
+
+        return md.ToString();
+    }
 }
