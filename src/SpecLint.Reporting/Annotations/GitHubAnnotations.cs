@@ -100,7 +100,7 @@ internal static class GitHubAnnotations
 
     private static string Message(Finding finding)
     {
-        var text = finding.Message.Trim();
+        var text = finding.Message.Trim() + finding.SettingSuffix;
         return finding.Fix is { } fix ? $"{text} (suggested: {fix.Path} = {fix.Value})" : text;
     }
 }

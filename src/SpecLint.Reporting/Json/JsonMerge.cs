@@ -124,7 +124,10 @@ internal static class JsonMerge
         var fix = f["fix"] is JsonObject x ? new FixSuggestion(x["path"]!.GetValue<string>(), x["value"]!.GetValue<string>()) : null;
         return new Finding(f["rule"]!.GetValue<string>(), severity, f["file"]!.GetValue<string>(), f["pointer"]?.GetValue<string>() ?? "",
             f["line"]!.GetValue<int>(), f["column"]!.GetValue<int>(), f["message"]!.GetValue<string>(), fix,
-            f["waived"]?.GetValue<bool>() ?? false, f["waiverReason"]?.GetValue<string>());
+            f["waived"]?.GetValue<bool>() ?? false, f["waiverReason"]?.GetValue<string>())
+        {
+            Setting = f["setting"]?.GetValue<string>(),
+        };
     }
 
     private static JsonArray ByFile(IEnumerable<JsonNode?> items) =>

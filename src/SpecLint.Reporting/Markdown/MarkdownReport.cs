@@ -193,7 +193,8 @@ internal sealed class MarkdownReport
     private void FindingLine(Finding f)
     {
         var fix = f.Fix is { } x ? $" **Fix:** set `{x.Path}` to `{x.Value}`." : "";
-        Line($"- **{f.Severity.Name()}** `{f.RuleId}` at [{MarkdownText.Cell(LineLabel(f))}]({LineLink(f)}): {MarkdownText.Cell(f.Message)}{fix}");
+        var setting = f.Setting is null ? "" : $" (setting {MarkdownText.Cell(f.Setting)})";
+        Line($"- **{f.Severity.Name()}** `{f.RuleId}`{setting} at [{MarkdownText.Cell(LineLabel(f))}]({LineLink(f)}): {MarkdownText.Cell(f.Message)}{fix}");
     }
 
     private void SpecSection(ReportSpec s, Options options)
@@ -204,11 +205,24 @@ internal sealed class MarkdownReport
         var title = s.Title is { Length: > 0 } t ? MarkdownText.Cell(t) + ". " : "";
         Line($"{title}File [{MarkdownText.Cell(Rel(s.File))}]({MarkdownText.Target(Rel(s.File))}). Nominal values at {section.Temperature} °C; noise at the hottest temperature.");
         Line();
-        Line("| Metric | Value | Note |");
-        Line("|---|---:|---|");
-        foreach (var (metric, value, note) in section.Metrics)
+        if (section.Settings.IsDefaultOrEmpty)
         {
-            Line($"| {metric} | {MarkdownText.Cell(value)} | {MarkdownText.Cell(note)} |");
+            Line("| Metric | Value | Note |");
+            Line("|---|---:|---|");
+            foreach (var (metric, value, note) in section.Metrics)
+            {
+                Line($"| {metric} | {MarkdownText.Cell(value)} | {MarkdownText.Cell(note)} |");
+            }
+        }
+        else
+        {
+            // One column per gain setting.
+            Line($"| Metric | {string.Join(" | ", section.Settings.Select(n => "setting " + MarkdownText.Cell(n)))} | Note |");
+            Line($"|---|{string.Concat(section.Settings.Select(_ => "---:|"))}---|");
+            foreach (var m in section.Metrics)
+            {
+                Line($"| {m.Metric} | {string.Join(" | ", m.Values.Select(MarkdownText.Cell))} | {MarkdownText.Cell(m.Note)} |");
+            }
         }
 
         Line();

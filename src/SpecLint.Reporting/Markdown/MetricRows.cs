@@ -47,7 +47,8 @@ internal static class MetricRows
         }
 
         string S(string name, Voltage v) => string.Create(CultureInfo.InvariantCulture, $"{name} {100 * v.Volts * v.Volts / total:0.#}%");
-        return string.Join(", ", S("Rf", o.RfThermal), S("Rsh", o.RshThermal), S("shot", o.Shot), S("i_n", o.CurrentNoise), S("e_n", o.VoltageNoise)) + " of the power";
+        var series = o.SeriesThermal.Volts > 0 ? ", " + S("switch, wiper or access R", o.SeriesThermal) : "";
+        return string.Join(", ", S("Rf", o.RfThermal), S("Rsh", o.RshThermal), S("shot", o.Shot), S("i_n", o.CurrentNoise), S("e_n", o.VoltageNoise)) + series + " of the power";
     }
 
     public static string Q(double si, Dimension d) => QuantityFormat.FormatRounded(si, d);

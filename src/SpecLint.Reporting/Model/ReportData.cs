@@ -57,7 +57,46 @@ internal sealed record ReportData(
             a.Circuit.Temperature.Celsius.ToString("0.#", CultureInfo.InvariantCulture),
             [.. MetricRows.For(a).Select(r => new ReportMetric(r.Metric, r.Value, r.Note))],
             s.Tolerances is { } tol ? [.. CornerSection.Lines(tol)] : []);
+        if (!s.Settings.IsDefaultOrEmpty)
+        {
+            section = SettingsSection(s);
+            return new ReportSpec(s.File, s.Name, s.Spec?.Title, result, pm, bw, noise, range, s.Findings, section, () => SettingCharts(s));
+        }
+
         return new ReportSpec(s.File, s.Name, s.Spec?.Title, result, pm, bw, noise, range, s.Findings, section, () => SpecCharts(a, s.Name));
+    }
+
+    /// <summary>A channel with more than one gain: one column per setting, and each setting's corner lines under its name.</summary>
+    private static ReportSection? SettingsSection(SpecOutcome s)
+    {
+        var analysed = s.Settings.Where(x => x.Analysis is not null).ToList();
+        if (analysed.Count == 0)
+        {
+            return null;
+        }
+
+        var rows = analysed.Select(x => MetricRows.For(x.Analysis!).ToList()).ToList();
+        // A note that quotes one setting's figures would mislead in a shared column: kept only where all agree.
+        var metrics = rows[0].Select((r, i) => new ReportMetric(r.Metric, r.Value, rows.All(row => i < row.Count && row[i].Note == r.Note) ? r.Note : "")
+        {
+            Values = [.. rows.Select(row => i < row.Count && row[i].Metric == r.Metric ? row[i].Value : "–")],
+        });
+        var corners = analysed
+            .Where(x => x.Tolerances is not null)
+            .SelectMany(x => CornerSection.Lines(x.Tolerances!).Prepend("").Prepend($"### Setting {MarkdownText.Cell(x.Name)}: tolerances"));
+        return new ReportSection(
+            analysed[0].Analysis!.Circuit.Temperature.Celsius.ToString("0.#", CultureInfo.InvariantCulture),
+            [.. metrics],
+            [.. corners])
+        {
+            Settings = [.. analysed.Select(x => x.Name)],
+        };
+    }
+
+    private static IReadOnlyList<ReportChart> SettingCharts(SpecOutcome s)
+    {
+        var analysed = s.Settings.Where(x => x.Analysis is not null).Select(x => (x.Name, x.Analysis!)).ToList();
+        return analysed.Count == 0 ? [] : Draw(SettingPlots.Build(analysed, s.Name), s.Name);
     }
 
     private static IReadOnlyList<ReportChart> SpecCharts(Core.Analysis.AnalysisResult? analysis, string name) =>

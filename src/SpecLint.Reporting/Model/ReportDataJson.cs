@@ -145,11 +145,20 @@ internal static class ReportDataJson
                 w.WriteStringValue(m.Metric);
                 w.WriteStringValue(m.Value);
                 w.WriteStringValue(m.Note);
+                foreach (var v in m.Values)
+                {
+                    w.WriteStringValue(v);
+                }
+
                 w.WriteEndArray();
             }
 
             w.WriteEndArray();
             WriteStrings(w, "corners", section.Corners);
+            if (!section.Settings.IsDefaultOrEmpty)
+            {
+                WriteStrings(w, "settings", section.Settings);
+            }
             w.WriteEndObject();
         }
 
@@ -226,7 +235,13 @@ internal static class ReportDataJson
         var s = node as JsonObject ?? throw Damaged("specs");
         var charts = Charts(s);
         ReportSection? section = s["section"] is JsonObject x
-            ? new ReportSection(Text(x, "temperature"), [.. Array(x, "metrics").Select(m => Row(m, 3)).Select(r => new ReportMetric(r[0], r[1], r[2]))], [.. Strings(x, "corners")])
+            ? new ReportSection(
+                Text(x, "temperature"),
+                [.. Array(x, "metrics").Select(m => Row(m, 3, atLeast: true)).Select(r => new ReportMetric(r[0], r[1], r[2]) { Values = [.. r.Skip(3)] })],
+                [.. Strings(x, "corners")])
+            {
+                Settings = x["settings"] is JsonArray ? [.. Strings(x, "settings")] : [],
+            }
             : null;
         return new ReportSpec(Text(s, "file"), Text(s, "name"), s["title"]?.GetValue<string>(), Text(s, "result"), Text(s, "phaseMargin"), Text(s, "bandwidth"),
             Text(s, "inputNoise"), Text(s, "outputRange"), Findings(s, "findings"), section, () => charts);
@@ -261,8 +276,10 @@ internal static class ReportDataJson
             ? JsonMerge.ToFinding(f)
             : throw Damaged(key))];
 
-    private static string[] Row(JsonNode? node, int length) =>
-        node is JsonArray a && a.Count == length ? [.. a.Select(v => v?.GetValue<string>() ?? throw Damaged("row"))] : throw Damaged("row");
+    private static string[] Row(JsonNode? node, int length, bool atLeast = false) =>
+        node is JsonArray a && (a.Count == length || (atLeast && a.Count > length))
+            ? [.. a.Select(v => v?.GetValue<string>() ?? throw Damaged("row"))]
+            : throw Damaged("row");
 
     private static IEnumerable<string> Strings(JsonObject o, string key) => Array(o, key).Select(n => n?.GetValue<string>() ?? throw Damaged(key));
 

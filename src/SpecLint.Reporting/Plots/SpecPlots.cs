@@ -30,6 +30,7 @@ internal static class SpecPlots
         var inoise = new double[frequencies.Length];
         var enoise = new double[frequencies.Length];
         var total = new double[frequencies.Length];
+        var series = new double[frequencies.Length];
         for (var i = 0; i < frequencies.Length; i++)
         {
             var f = new Frequency(frequencies[i]);
@@ -43,6 +44,7 @@ internal static class SpecPlots
             inoise[i] = Math.Sqrt(n.CurrentNoise);
             enoise[i] = Math.Sqrt(n.VoltageNoise);
             total[i] = Math.Sqrt(n.Total);
+            series[i] = Math.Sqrt(n.SeriesThermal);
         }
 
         var sources = new List<NoiseContribution> { new("Rf thermal", rf) };
@@ -54,6 +56,11 @@ internal static class SpecPlots
         sources.Add(new("shot (Imin + Idark)", shot));
         sources.Add(new("op-amp i_n", inoise));
         sources.Add(new("op-amp e_n × noise gain", enoise));
+        if (circuit.HasNetwork)
+        {
+            sources.Add(new("switch, wiper or access R thermal", series));
+        }
+
         var temperature = noiseTemperature.Celsius.ToString("0.#", CultureInfo.InvariantCulture);
         return
         [

@@ -212,6 +212,11 @@ internal static class SarifWriter
 
         json.WriteStartObject("properties");
         json.WriteString("pointer", finding.Pointer);
+        if (finding.Setting is not null)
+        {
+            json.WriteString("setting", finding.Setting);
+        }
+
         if (finding.Fix is { } fix)
         {
             // SARIF's own fixes[] needs the exact character span of the old value, which findings do not carry;
@@ -229,7 +234,8 @@ internal static class SarifWriter
     /// <summary>The message as code scanning shows it: its first sentence is the alert title, so it leads with the finding.</summary>
     internal static string MessageText(Finding finding)
     {
-        var text = Sentence(finding.Message);
+        // The setting leads, so the alert title says which gain it is about.
+        var text = (finding.Setting is null ? "" : $"Setting {finding.Setting}: ") + Sentence(finding.Message);
         if (finding.Fix is { } fix)
         {
             text += $" Suggested fix: set {fix.Path} to {fix.Value}.";

@@ -16,7 +16,7 @@ internal static class AcceptedFile
     /// <summary>The format version written in the file.</summary>
     public const int Version = 1;
 
-    private static readonly string[] Keys = ["rule", "spec", "pointer", "reason", "date"];
+    private static readonly string[] Keys = ["rule", "spec", "pointer", "setting", "reason", "date"];
 
     /// <summary>Reads <paramref name="path"/>; on a problem returns null with a <c>file:line:col: message</c> error.</summary>
     public static ImmutableArray<AcceptedEntry>? Read(string path, string displayPath, out string? error)
@@ -167,7 +167,11 @@ internal static class AcceptedFile
             return false;
         }
 
-        entry = new AcceptedEntry(new FindingKey(values["rule"]!, values["spec"]!, values["pointer"]!), values.GetValueOrDefault("reason"), date, Position(bytes, start).Line);
+        entry = new AcceptedEntry(
+            new FindingKey(values["rule"]!, values["spec"]!, values["pointer"]!, values.GetValueOrDefault("setting")),
+            values.GetValueOrDefault("reason"),
+            date,
+            Position(bytes, start).Line);
         problem = null;
         return true;
     }
@@ -188,6 +192,11 @@ internal static class AcceptedFile
                 w.WriteString("rule", e.Key.Rule);
                 w.WriteString("spec", e.Key.Spec);
                 w.WriteString("pointer", e.Key.Pointer);
+                if (e.Key.Setting is not null)
+                {
+                    w.WriteString("setting", e.Key.Setting);
+                }
+
                 if (e.Reason is null)
                 {
                     w.WriteNull("reason");
