@@ -77,20 +77,25 @@ public sealed class BandwidthBelowRequirementRule : IRule
 
     private static string Unreachable(RuleContext context, FixSearchResult search, Angle floor)
     {
-        const string Otherwise = "lower Rf, reduce the input capacitance, or use an op-amp with more GBW.";
+        var sw = context.Spec.Feedback.Switch;
+        var others = context.Spec.Feedback.Settings.Length - 1;
+        // Below its own corners an unselected branch is its open switch's capacitance across the feedback.
+        var otherwise = sw is { OffCapacitance.Farads: > 0 } && others > 0
+            ? $"lower Rf, reduce the input capacitance, use an op-amp with more GBW, or a switch with less off-capacitance: the {others} other setting{(others == 1 ? "" : "s")} put{(others == 1 ? "s" : "")} about {Fmt.Q(new Capacitance(others * sw.OffCapacitance.Farads))} across Rf through the open switch{(others == 1 ? "" : "es")}."
+            : "lower Rf, reduce the input capacitance, or use an op-amp with more GBW.";
         if (search.Closest is not { } closest)
         {
-            return $" No standard Cf meets it while keeping the {floor.Degrees:0.#}° phase-margin floor: {Otherwise}";
+            return $" No standard Cf meets it while keeping the {floor.Degrees:0.#}° phase-margin floor: {otherwise}";
         }
 
         if (search.RejectedBy == Info.Id)
         {
-            return $" No standard Cf meets it, whatever the phase margin: {Otherwise}";
+            return $" No standard Cf meets it, whatever the phase margin: {otherwise}";
         }
 
         var text = SpecEdits.CfText(context.Spec, new Capacitance(closest));
         return search.RejectedBy == PhaseMarginBelowFloorRule.Info.Id
-            ? $" No standard Cf meets it while keeping the {floor.Degrees:0.#}° phase-margin floor: phase-margin rejects Cf = {text}, the largest that meets the bandwidth, and every smaller one tried. Otherwise {Otherwise}"
-            : $" Cf = {text} would meet it with the {floor.Degrees:0.#}° phase-margin floor kept, but {search.RejectedBy} rejects it ({search.Requirement}). Otherwise {Otherwise}";
+            ? $" No standard Cf meets it while keeping the {floor.Degrees:0.#}° phase-margin floor: phase-margin rejects Cf = {text}, the largest that meets the bandwidth, and every smaller one tried. Otherwise {otherwise}"
+            : $" Cf = {text} would meet it with the {floor.Degrees:0.#}° phase-margin floor kept, but {search.RejectedBy} rejects it ({search.Requirement}). Otherwise {otherwise}";
     }
 }

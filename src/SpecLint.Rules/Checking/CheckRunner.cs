@@ -165,6 +165,11 @@ internal static class CheckRunner
         }
 
         var merged = SettingFindings.Merge([.. perView.Select(p => (p.View.Setting!, (IReadOnlyList<Finding>)p.Findings))], adjustable);
+        if (adjustable)
+        {
+            merged = RangeFixes.Verify(channel, merged, [.. perView.SelectMany(p => p.Findings)], view => CheckView(view, config, options, tolerances).Findings);
+        }
+
         var all = Order(WaiverApplication.Apply(channel, merged, options.Today, options.Catalog.KnownIds));
         var settings = perView
             .Select(p => new SettingOutcome(

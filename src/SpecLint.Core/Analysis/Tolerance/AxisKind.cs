@@ -17,4 +17,5 @@ internal enum AxisKind
     SupplyNegative,
     DarkCurrent,
     Bias,
+    SeriesResistance,
 }

@@ -55,6 +55,11 @@ internal sealed class ToleranceBox
             Add(axes, AxisKind.ShuntResistance, SpecPointers.ShuntResistance, "Rsh", rsh);
         }
 
+        if (spec.Input.SeriesResistance is { } rs)
+        {
+            Add(axes, AxisKind.SeriesResistance, SpecPointers.SeriesResistance, "Rs", rs);
+        }
+
         Add(axes, AxisKind.StrayCapacitance, SpecPointers.StrayCapacitance, "Cstray", spec.Board.StrayCapacitance);
         Add(axes, AxisKind.Gbw, SpecPointers.Gbw, "GBW", spec.Amplifier.Gbw);
         if (spec.Amplifier.SecondPole is { } p2)
@@ -94,6 +99,7 @@ internal sealed class ToleranceBox
         double stray = c.StrayCapacitance.Farads, gbw = c.Gbw.Hertz, kelvin = c.Temperature.Kelvin;
         double vpos = c.SupplyPositive.Volts, vneg = c.SupplyNegative.Volts, idark = c.Idark.Amperes, vbias = c.Vbias.Volts;
         var rsh = c.Rsh?.Ohms;
+        var rs = c.SeriesResistance.Ohms;
         var p2 = c.SecondPole?.Hertz;
         for (var i = 0; i < x.Length; i++)
         {
@@ -114,6 +120,7 @@ internal sealed class ToleranceBox
                 case AxisKind.SupplyNegative: vneg = v; break;
                 case AxisKind.DarkCurrent: idark = v; break;
                 case AxisKind.Bias: vbias = v; break;
+                case AxisKind.SeriesResistance: rs = v; break;
             }
         }
 
@@ -134,6 +141,7 @@ internal sealed class ToleranceBox
             SupplyNegative = new Voltage(vneg),
             Idark = new Current(idark),
             Vbias = new Voltage(vbias),
+            SeriesResistance = new Resistance(rs),
         };
     }
 
