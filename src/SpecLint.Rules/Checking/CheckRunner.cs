@@ -158,9 +158,8 @@ internal static class CheckRunner
         foreach (var view in views)
         {
             var (analysis, findings, failure) = CheckView(view, config, options, tolerances);
-            var list = failure is null
-                ? [.. findings.Select(f => SettingFindings.Remap(view, f, adjustable))]
-                : Failed(view, config, options, failure, view.Setting).Findings.ToList();
+            var raw = failure is null ? findings : Failed(view, config, options, failure, view.Setting).Findings;
+            List<Finding> list = [.. raw.Select(f => SettingFindings.Remap(view, f, adjustable))];
             perView.Add((view, failure is null ? analysis : null, list));
         }
 

@@ -28,6 +28,13 @@ internal static class RangeFixes
                 continue;
             }
 
+            // Only a value every position shares can be rewritten for the whole range.
+            if (f.Fix.Path != CfPointer)
+            {
+                result.Add(f with { Fix = null });
+                continue;
+            }
+
             var candidates = all
                 .Where(x => x.RuleId == f.RuleId && x.Pointer == f.Pointer && x.Fix is not null)
                 .Select(x => x.Fix!)
@@ -48,7 +55,6 @@ internal static class RangeFixes
 
     private static bool Clears(TiaSpec channel, FixSuggestion fix, string ruleId, Func<TiaSpec, IReadOnlyList<Finding>> check)
     {
-        // Only a value every position shares can be rewritten for the whole range.
         if (fix.Path != CfPointer)
         {
             return false;

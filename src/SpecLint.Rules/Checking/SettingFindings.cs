@@ -90,9 +90,16 @@ internal static class SettingFindings
                 continue;
             }
 
+            // A rule whose worst position is not known (a plausibility check, a house rule) keeps every position's finding.
             var wanted = WorstPositionOf.GetValueOrDefault(group.Key.RuleId);
-            var pick = (wanted is null ? null : group.FirstOrDefault(f => f.Setting!.EndsWith("(" + wanted + ")", StringComparison.Ordinal)
-                    || f.Setting.Contains("(" + wanted + ",", StringComparison.Ordinal) || f.Setting.Contains(", " + wanted, StringComparison.Ordinal)))
+            if (wanted is null)
+            {
+                result.AddRange(group);
+                continue;
+            }
+
+            var pick = group.FirstOrDefault(f => f.Setting!.EndsWith("(" + wanted + ")", StringComparison.Ordinal)
+                    || f.Setting.Contains("(" + wanted + ",", StringComparison.Ordinal) || f.Setting.Contains(", " + wanted, StringComparison.Ordinal))
                 ?? group.First();
             result.Add(pick);
         }

@@ -39,6 +39,7 @@ public sealed partial class SpecFuzzTests
     [
         "open-loop-gain", "dark-current", "bias-current", "gbw", "resistance", "capacitance", "bias", "temperature", "second-pole",
         "voltage-noise-corner", "slew-rate", "min-stable-gain", "peaking", "phase-margin", "bandwidth", "unknown-key", "Gbw",
+        "series-resistance", "on-resistance", "off-capacitance", "adjustable", "steps", "wiper-resistance", "tolerance", "setting", "name",
     ];
 
     private static readonly string[] ConfigValues =
