@@ -17,17 +17,80 @@ internal static class ClosedLoopPoles
     /// </summary>
     public static IReadOnlyList<(double CentreU, double HalfWidthU)> Resonances(TiaModel model)
     {
-        var coefficients = model.DenominatorCoefficients();
+        var result = new List<(double, double)>();
+        var roots = model.Network is null ? Roots(model.DenominatorCoefficients()) : NetworkRoots(model);
+        foreach (var p in roots)
+        {
+            // One of each conjugate pair; a pair's imaginary part is never rounding-small next to its real part here.
+            if (p.Imaginary > 1e-9 * Complex.Abs(p))
+            {
+                result.Add((Math.Log(p.Imaginary / (2 * Math.PI)), Math.Abs(p.Real) / p.Imaginary));
+            }
+        }
+
+        return result;
+    }
+
+    /// <summary>
+    /// A network's denominator polynomial multiplies D by every branch's own denominator, and its companion roots can
+    /// lose a lightly damped pair among branch poles spread over many decades. So its roots, and those of the plain
+    /// circuit that behaves the same (<see cref="TiaModel.PlainEquivalent"/>), only seed Newton's method on D(s)
+    /// itself, evaluated from the branches; a seed that converges is a pole.
+    /// </summary>
+    private static List<Complex> NetworkRoots(TiaModel model)
+    {
+        var seeds = Roots(model.DenominatorCoefficients()).Concat(Roots(new TiaModel(model.PlainEquivalent()).DenominatorCoefficients()));
+        var poles = new List<Complex>();
+        foreach (var seed in seeds)
+        {
+            if (!(seed.Imaginary > 0) || Polish(model, seed) is not { } p || !(p.Imaginary > 0))
+            {
+                continue;
+            }
+
+            if (!poles.Any(q => Complex.Abs(q - p) <= 1e-6 * Complex.Abs(p)))
+            {
+                poles.Add(p);
+            }
+        }
+
+        return poles;
+    }
+
+    private static Complex? Polish(TiaModel model, Complex s)
+    {
+        for (var k = 0; k < 60; k++)
+        {
+            var d = model.DenominatorAt(s);
+            var h = 1e-7 * Complex.Abs(s);
+            var slope = (model.DenominatorAt(s + h) - model.DenominatorAt(s - h)) / (2 * h);
+            if (slope == Complex.Zero || !double.IsFinite(slope.Real) || !double.IsFinite(slope.Imaginary))
+            {
+                return null;
+            }
+
+            var step = d / slope;
+            s -= step;
+            if (Complex.Abs(step) <= 1e-12 * Complex.Abs(s))
+            {
+                return s;
+            }
+        }
+
+        return null;
+    }
+
+    private static IEnumerable<Complex> Roots(double[] coefficients)
+    {
         var degree = coefficients.Length - 1;
         while (degree > 0 && coefficients[degree] == 0)
         {
             degree--;
         }
 
-        var result = new List<(double, double)>();
         if (degree < 2)
         {
-            return result;
+            return [];
         }
 
         // Scale s = ω0·x so the companion matrix is balanced: ω0 from the outer coefficients' ratio.
@@ -44,16 +107,6 @@ internal static class ClosedLoopPoles
             scaled[k] /= peak;
         }
 
-        foreach (var x in FindRoots.Polynomial(scaled))
-        {
-            var p = x * w0;
-            // One of each conjugate pair; a pair's imaginary part is never rounding-small next to its real part here.
-            if (p.Imaginary > 1e-9 * Complex.Abs(p))
-            {
-                result.Add((Math.Log(p.Imaginary / (2 * Math.PI)), Math.Abs(p.Real) / p.Imaginary));
-            }
-        }
-
-        return result;
+        return FindRoots.Polynomial(scaled).Select(x => x * w0);
     }
 }

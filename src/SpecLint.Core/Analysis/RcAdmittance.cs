@@ -118,8 +118,8 @@ internal sealed class RcAdmittance
             return a;
         }
 
-        var lo = a > 0 ? a * (1 + 1e-13) : 0;
-        var hi = b * (1 - 1e-13);
+        var lo = a > 0 ? a * (1 + 1e-15) : 0;
+        var hi = b * (1 - 1e-15);
         if (OnAxis(hi) >= 0)
         {
             return hi;
@@ -145,7 +145,7 @@ internal sealed class RcAdmittance
 
     private double ZeroAbove(double a)
     {
-        var lo = a > 0 ? a * (1 + 1e-13) : 1;
+        var lo = a > 0 ? a * (1 + 1e-15) : 1;
         if (a <= 0)
         {
             // No pole at all: Y = G + sC, one zero at G/C (bracketed by decades from 1 rad/s).

@@ -359,6 +359,41 @@ public sealed class TiaModel
         ng2 = zt2 * ((gSum * gSum) + (wc * wc));
     }
 
+    /// <summary>D(s) = Yf + (Yf + Yin)/A(s) at a complex frequency (the denominator of every noise transfer).</summary>
+    internal Complex DenominatorAt(Complex s)
+    {
+        var inverseA = (_invA0 + (s * _invWtSeconds)) * (1 + (s * _invWp2Seconds));
+        if (_network is { } n)
+        {
+            return n.Feedback.At(s) + (n.Sum.At(s) * inverseA);
+        }
+
+        var yf = _gfSiemens + (s * _cfbFarads);
+        return yf + ((yf + _gshSiemens + (s * _cinFarads)) * inverseA);
+    }
+
+    /// <summary>
+    /// A plain circuit that behaves like this one away from the network's own corners: Rf plus the switch, the
+    /// unselected branches' capacitance across the feedback, the sensor straight at the node.
+    /// </summary>
+    internal Circuit PlainEquivalent()
+    {
+        var extra = Capacitance.Zero;
+        foreach (var b in Circuit.OffBranches.IsDefault ? [] : Circuit.OffBranches)
+        {
+            extra += new Capacitance(b.Capacitance.Farads > 0 ? b.OffCapacitance.Farads * b.Capacitance.Farads / (b.OffCapacitance.Farads + b.Capacitance.Farads) : b.OffCapacitance.Farads);
+        }
+
+        return Circuit with
+        {
+            Rf = Circuit.DcFeedbackResistance,
+            Cpar = Circuit.Cpar + extra,
+            FeedbackSeriesResistance = Resistance.Zero,
+            OffBranches = [],
+            SeriesResistance = Resistance.Zero,
+        };
+    }
+
     /// <summary>The network model of a switched, adjustable or electrode circuit; null for a plain one.</summary>
     internal TiaNetwork? Network => _network;
 
