@@ -29,17 +29,7 @@ internal sealed class RcAdmittance
     public double[] Zeros { get; }
 
     /// <summary>Y(jω).</summary>
-    public Complex AtOmega(double w)
-    {
-        var s = new Complex(0, w);
-        Complex sum = 0;
-        foreach (var b in _branches)
-        {
-            sum += b.At(s);
-        }
-
-        return sum;
-    }
+    public Complex AtOmega(double w) => At(new Complex(0, w));
 
     /// <summary>Y(s) at any complex frequency.</summary>
     public Complex At(Complex s)

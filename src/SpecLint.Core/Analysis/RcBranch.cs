@@ -28,9 +28,6 @@ internal readonly record struct RcBranch(double G, double C, double SeriesR, dou
         return y;
     }
 
-    /// <summary>Y(jω), written out for the hot paths.</summary>
-    public Complex AtOmega(double w) => At(new Complex(0, w));
-
     /// <summary>Y(−σ) on the negative real axis (real there).</summary>
     public double OnNegativeAxis(double sigma)
     {

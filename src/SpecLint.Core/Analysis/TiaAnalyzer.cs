@@ -253,25 +253,9 @@ public static class TiaAnalyzer
     internal static double DcSignalShare(Circuit c) =>
         c.Rsh is { } rsh && c.SeriesResistance.Ohms > 0 ? rsh.Ohms / (rsh.Ohms + c.SeriesResistance.Ohms) : 1;
 
-    /// <summary>What the unselected branches add across the feedback at high frequency: each Coff in series with C_k.</summary>
-    private static double HighFrequencyOffCapacitance(Circuit c)
-    {
-        var sum = 0.0;
-        if (c.OffBranches.IsDefaultOrEmpty)
-        {
-            return sum;
-        }
-
-        // A branch without capacitance looks like its resistor at high frequency and adds none.
-        foreach (var b in c.OffBranches)
-        {
-            var ck = b.Capacitance.Farads;
-            var c0 = b.OffCapacitance.Farads;
-            sum += ck > 0 ? c0 * ck / (c0 + ck) : 0;
-        }
-
-        return sum;
-    }
+    /// <summary>What the unselected branches add across the feedback at high frequency.</summary>
+    private static double HighFrequencyOffCapacitance(Circuit c) =>
+        c.OffBranches.IsDefaultOrEmpty ? 0 : c.OffBranches.Sum(b => b.HighFrequencyCapacitance.Farads);
 
     private static OutputRange DcOutput(Circuit c)
     {

@@ -381,7 +381,7 @@ public sealed class TiaModel
         var extra = Capacitance.Zero;
         foreach (var b in Circuit.OffBranches.IsDefault ? [] : Circuit.OffBranches)
         {
-            extra += new Capacitance(b.Capacitance.Farads > 0 ? b.OffCapacitance.Farads * b.Capacitance.Farads / (b.OffCapacitance.Farads + b.Capacitance.Farads) : b.OffCapacitance.Farads);
+            extra += b.HighFrequencyCapacitance;
         }
 
         return Circuit with
