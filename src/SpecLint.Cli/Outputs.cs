@@ -67,9 +67,7 @@ internal static class Outputs
                 output.Write(request.ShardData ? ReportDataJson.AddTo(JsonReport.Write(run), data.Value) : JsonReport.Write(run));
                 break;
             case "github":
-                // Compared with a base, only what the change introduced is annotated on the diff.
-                var annotated = run.Changes is null ? run.AllFindings : run.Specs.SelectMany(s => s.Findings).Where(run.Changes.IsNew).Concat(run.RunProblems);
-                GitHubAnnotations.Write(output, annotated.Where(f => !run.IsAccepted(f)).ToList(), Directory.GetCurrentDirectory());
+                GitHubAnnotations.Write(output, GitHubAnnotations.Of(run), Directory.GetCurrentDirectory());
                 output.WriteLine(TerminalReport.Summary(run, outputFailed: failed));
                 break;
             default:

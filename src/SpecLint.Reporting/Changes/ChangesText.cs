@@ -34,10 +34,9 @@ internal static class ChangesText
 
         if (run.Acceptance is { } accepted)
         {
-            foreach (var e in accepted.Stale)
+            foreach (var n in accepted.StaleNotes)
             {
-                yield return string.Create(CultureInfo.InvariantCulture,
-                    $"{accepted.File}:{e.Line}:1: note accepted-stale: '{e.Key.Rule}' at {(e.Key.Pointer.Length == 0 ? "/" : e.Key.Pointer)} of {e.Key.Spec} no longer occurs; remove the entry");
+                yield return string.Create(CultureInfo.InvariantCulture, $"{n.File}:{n.Line}:{n.Column}: note {n.RuleId}: {n.Message}");
             }
         }
     }
