@@ -23,6 +23,12 @@ internal static class ChangesJson
         w.WriteString("mergeBase", changes.MergeBase);
         w.WriteString("gate", run.Gate == Gate.New ? "new" : "all");
         w.WriteBoolean("everySpec", changes.AllSpecs);
+        if (!changes.BaseNotes.IsEmpty)
+        {
+            // Only when there are some, so the output of every run whose base built stays as it was.
+            Findings(w, "baseNotes", changes.BaseNotes, run);
+        }
+
         w.WriteEndObject();
         w.WriteStartArray("changes");
         foreach (var c in changes.Specs)
