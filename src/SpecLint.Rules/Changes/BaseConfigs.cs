@@ -20,8 +20,12 @@ internal sealed class BaseConfigs(GitChangeSet changes, CheckOptions options, Ru
     private readonly Dictionary<string, (RepoConfig Config, RuleCatalog Catalog)> _cache = new(StringComparer.Ordinal);
     private readonly List<Finding> _notes = [];
 
-    /// <summary>Why the base's house rules could not be used, in the order met (empty when they could).</summary>
-    public ImmutableArray<Finding> Notes => [.. _notes];
+    /// <summary>
+    /// Why the base's house rules could not be used (empty when they could), by file, line, column and message:
+    /// the order does not depend on which specs a shard met them through.
+    /// </summary>
+    public ImmutableArray<Finding> Notes => [.. _notes
+        .OrderBy(n => n.File, StringComparer.Ordinal).ThenBy(n => n.Line).ThenBy(n => n.Column).ThenBy(n => n.Message, StringComparer.Ordinal)];
 
     /// <summary>The configuration and rules for the base version of the spec shown as <paramref name="specDisplayPath"/>.</summary>
     public (RepoConfig Config, RuleCatalog Catalog) For(string specDisplayPath)

@@ -61,7 +61,7 @@ public sealed class BaseHouseRulesTests
         var a = Change(doc, "hw/a.tia.yaml");
         Assert.Contains("guard-ring-note", Rules(a, "new"));
         Assert.DoesNotContain("guard-ring-note", Rules(a, "unchanged"));
-        Assert.False(doc.RootElement.GetProperty("against").TryGetProperty("baseNotes", out _));
+        Assert.False(doc.RootElement.TryGetProperty("baseNotes", out _));
         // The rule's cases are not specs of the change.
         Assert.Single(doc.RootElement.GetProperty("changes").EnumerateArray());
     }
@@ -136,11 +136,19 @@ public sealed class BaseHouseRulesTests
         Assert.Contains($"note house-rule-invalid: the house rules at the merge base {mergeBase} could not be built", output, StringComparison.Ordinal);
         Assert.Contains("judged by this change's house rules instead", output, StringComparison.Ordinal);
 
-        var json = cli.Run("check", "--against", "main", "--nominal-only", "--format", "json", "--gate", "new");
+        var json = cli.Run("check", "--against", "main", "--nominal-only", "--format", "json", "--gate", "new", "--report", "out/report.md");
         using var doc = JsonDocument.Parse(json.Out);
-        var note = Assert.Single(doc.RootElement.GetProperty("against").GetProperty("baseNotes").EnumerateArray());
+        var note = Assert.Single(doc.RootElement.GetProperty("baseNotes").EnumerateArray());
         Assert.Equal("note", note.GetProperty("severity").GetString());
+        Assert.Equal("house-rules/guard-ring-note/GuardRingNoteRule.cs", note.GetProperty("file").GetString());
         Assert.Contains("guard-ring-note", Rules(Change(doc, "hw/a.tia.yaml"), "unchanged"));
+        Assert.Contains($"the house rules at the merge base {mergeBase} could not be built", File.ReadAllText(cli.Path_("out/report.md")), StringComparison.Ordinal);
+
+        // Shards of the run merge into the same JSON, notes included.
+        var shard = cli.Run("check", "--against", "main", "--nominal-only", "--format", "json", "--gate", "new", "--shard", "1/1");
+        cli.Write("shard-1.json", shard.Out);
+        var merged = cli.Run("merge", "shard-1.json");
+        Assert.Equal(json.Out.TrimEnd(), merged.Out.TrimEnd());
     }
 
     private static void AddFlaggingRuleAgain(CliHarness cli)
