@@ -8,7 +8,7 @@ namespace SpecLint.Benchmarks;
 /// BenchmarkDotNet suites, <c>-- montecarlo [specs] [samples]</c> for the timed tolerance run, <c>-- check [specs] [repeats]</c> for whole checks
 /// in a child process, or <c>-- houserules [repeats]</c> for
 /// the whole-process cost of compiling and of loading cached house rules, or <c>-- profile [rounds]</c> for the time and
-/// memory of each stage of one spec, <c>-- profile-cold</c> for the first spec of a fresh process.
+/// memory of each stage of one spec, <c>-- profile-cold</c> for the first spec of a fresh process, <c>-- profile-specs [rounds]</c> for the check of each example and demo spec.
 /// </summary>
 public static class Program
 {
@@ -35,6 +35,12 @@ public static class Program
         if (args.Length > 0 && args[0] == "profile-cold")
         {
             ColdProfileBench.Run();
+            return;
+        }
+
+        if (args.Length > 0 && args[0] == "profile-specs")
+        {
+            SpecProfileBench.Run(args.Length > 1 ? int.Parse(args[1], CultureInfo.InvariantCulture) : 3, args.Length > 2 ? args[2] : null);
             return;
         }
 
