@@ -64,7 +64,15 @@ internal static class Outputs
         switch (request.Format)
         {
             case "json":
-                output.Write(request.ShardData ? ReportDataJson.AddTo(JsonReport.Write(run), data.Value) : JsonReport.Write(run));
+                if (request.ShardData)
+                {
+                    output.Write(ReportDataJson.AddTo(JsonReport.Write(run), data.Value));
+                }
+                else
+                {
+                    JsonReport.Write(run, output);
+                }
+
                 break;
             case "github":
                 GitHubAnnotations.Write(output, GitHubAnnotations.Of(run), Directory.GetCurrentDirectory());

@@ -1,16 +1,31 @@
-using System.Collections.Frozen;
-
 namespace SpecLint.Core.Spec;
 
 /// <summary>Source positions of every node of a spec, keyed by RFC 6901 JSON Pointer ("" is the root).</summary>
+/// <remarks>
+/// A run keeps every spec (and every gain setting's view) until its output is written, so the map is two sorted
+/// arrays searched by halves, and its pointers are shared between specs (<see cref="PointerPool"/>): a hashed or
+/// frozen dictionary with its own copy of each pointer took several times the memory for the few lookups a spec needs.
+/// </remarks>
 public sealed class SourceMap
 {
-    private readonly FrozenDictionary<string, SourcePosition> _positions;
+    private readonly string[] _keys;
+    private readonly SourcePosition[] _values;
 
     /// <summary>Creates a map from pointer → position pairs.</summary>
     public SourceMap(IReadOnlyDictionary<string, SourcePosition> positions)
     {
-        _positions = positions.ToFrozenDictionary(StringComparer.Ordinal);
+        ArgumentNullException.ThrowIfNull(positions);
+        _keys = new string[positions.Count];
+        _values = new SourcePosition[positions.Count];
+        var i = 0;
+        foreach (var (key, value) in positions)
+        {
+            _keys[i] = PointerPool.Share(key);
+            _values[i] = value;
+            i++;
+        }
+
+        Array.Sort(_keys, _values, StringComparer.Ordinal);
     }
 
     /// <summary>An empty map (every lookup gives the start of the file).</summary>
@@ -22,11 +37,17 @@ public sealed class SourceMap
     /// </summary>
     internal SourceMap WithAliases(IEnumerable<(string View, string File)> aliases)
     {
-        var positions = new Dictionary<string, SourcePosition>(_positions, StringComparer.Ordinal);
+        var positions = new Dictionary<string, SourcePosition>(_keys.Length, StringComparer.Ordinal);
+        for (var i = 0; i < _keys.Length; i++)
+        {
+            positions[_keys[i]] = _values[i];
+        }
+
         foreach (var (view, file) in aliases)
         {
-            foreach (var (key, pos) in _positions)
+            for (var i = 0; i < _keys.Length; i++)
             {
+                var (key, pos) = (_keys[i], _values[i]);
                 if (key == file || (view != "/feedback" && key.StartsWith(file + "/", StringComparison.Ordinal)))
                 {
                     positions[view + key[file.Length..]] = pos;
@@ -38,7 +59,7 @@ public sealed class SourceMap
     }
 
     /// <summary>Whether the pointer names a node that was written in the file.</summary>
-    public bool Contains(string pointer) => _positions.ContainsKey(pointer);
+    public bool Contains(string pointer) => Array.BinarySearch(_keys, pointer, StringComparer.Ordinal) >= 0;
 
     /// <summary>
     /// The position of the node, or of its nearest written ancestor when the key was left out (a finding
@@ -49,9 +70,10 @@ public sealed class SourceMap
         var p = pointer;
         while (true)
         {
-            if (_positions.TryGetValue(p, out var pos))
+            var at = Array.BinarySearch(_keys, p, StringComparer.Ordinal);
+            if (at >= 0)
             {
-                return pos;
+                return _values[at];
             }
 
             if (p.Length == 0)

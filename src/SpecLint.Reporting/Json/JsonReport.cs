@@ -17,8 +17,36 @@ internal static class JsonReport
     /// <summary>The JSON document for a run, indented, with a trailing newline.</summary>
     public static string Write(CheckRun run)
     {
+        using var text = new StringWriter(System.Globalization.CultureInfo.InvariantCulture) { NewLine = "\n" };
+        Write(run, text);
+        return text.ToString();
+    }
+
+    /// <summary>
+    /// Writes the JSON document for a run to <paramref name="output"/>, one spec at a time: a run of thousands of
+    /// specs never holds the whole document in memory (as bytes, then again as a string).
+    /// </summary>
+    public static void Write(CheckRun run, TextWriter output)
+    {
         ArgumentNullException.ThrowIfNull(run);
+        ArgumentNullException.ThrowIfNull(output);
         using var buffer = new MemoryStream();
+        var decoder = Encoding.UTF8.GetDecoder();
+        var chars = new char[4096];
+        void Drain(Utf8JsonWriter w)
+        {
+            w.Flush();
+            var bytes = buffer.GetBuffer().AsSpan(0, (int)buffer.Length);
+            while (!bytes.IsEmpty)
+            {
+                decoder.Convert(bytes, chars, flush: false, out var used, out var produced, out _);
+                output.Write(chars, 0, produced);
+                bytes = bytes[used..];
+            }
+
+            buffer.SetLength(0);
+        }
+
         using (var w = new Utf8JsonWriter(buffer, new JsonWriterOptions { Indented = true, Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping }))
         {
             w.WriteStartObject();
@@ -27,6 +55,7 @@ internal static class JsonReport
             foreach (var spec in run.Specs)
             {
                 WriteSpec(w, spec, run);
+                Drain(w);
             }
 
             w.WriteEndArray();
@@ -42,9 +71,10 @@ internal static class JsonReport
             w.WriteString("failOn", run.FailOn.Name());
             w.WriteNumber("exitCode", run.ExitCode);
             w.WriteEndObject();
+            Drain(w);
         }
 
-        return Encoding.UTF8.GetString(buffer.ToArray()) + "\n";
+        output.Write('\n');
     }
 
     private static void WriteSpec(Utf8JsonWriter w, SpecOutcome spec, CheckRun run)
