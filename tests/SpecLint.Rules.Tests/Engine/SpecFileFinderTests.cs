@@ -22,6 +22,53 @@ public sealed class SpecFileFinderTests
     }
 
     [Fact]
+    public void Globs_agree_with_their_regular_expression_on_random_patterns_and_paths()
+    {
+        // The documented meaning written as a regular expression (common practice for globs: '**/' any number of
+        // whole folders, '**' anything, '*' a run within one name, '?' one character other than '/').
+        static string AsRegex(string glob)
+        {
+            var sb = new System.Text.StringBuilder("^");
+            for (var i = 0; i < glob.Length; i++)
+            {
+                if (glob[i] == '*' && i + 1 < glob.Length && glob[i + 1] == '*')
+                {
+                    var folders = i + 2 < glob.Length && glob[i + 2] == '/';
+                    sb.Append(folders ? "(?:[^/]+/)*" : ".*");
+                    i += folders ? 2 : 1;
+                }
+                else
+                {
+                    sb.Append(glob[i] switch { '*' => "[^/]*", '?' => "[^/]", var c => System.Text.RegularExpressions.Regex.Escape(c.ToString()) });
+                }
+            }
+
+            return sb.Append('$').ToString();
+        }
+
+        var random = new Random(20261202);
+        string[] globParts = ["a", "b", ".", "/", "*", "?", "**/", "**"];
+        string[] pathParts = ["a", "b", ".", "/", "ab", "a/b/"];
+        for (var n = 0; n < 20000; n++)
+        {
+            var glob = string.Concat(Enumerable.Range(0, random.Next(1, 7)).Select(_ => globParts[random.Next(globParts.Length)]));
+            var path = string.Concat(Enumerable.Range(0, random.Next(0, 7)).Select(_ => pathParts[random.Next(pathParts.Length)]));
+            var expected = System.Text.RegularExpressions.Regex.IsMatch(path, AsRegex(glob.TrimStart('/')));
+            Assert.True(expected == new GlobPattern(glob).IsMatch(path), $"glob '{glob}' on '{path}': expected {expected}");
+        }
+    }
+
+    [Fact]
+    public void A_glob_of_many_double_stars_matches_a_deep_path_in_linear_time()
+    {
+        // Backtracking would take exponential time here; the state-set matcher reads the path once.
+        var glob = string.Concat(Enumerable.Repeat("**/", 40)) + "x.tia.yaml";
+        var path = string.Concat(Enumerable.Repeat("d/", 200)) + "x.tia.yml";
+        Assert.False(new GlobPattern(glob).IsMatch(path));
+        Assert.True(new GlobPattern(glob).IsMatch(path[..^3] + "yaml"));
+    }
+
+    [Fact]
     public void Finds_the_included_files_in_ordinal_order_and_skips_build_folders()
     {
         using var repo = new TempRepo();

@@ -15,7 +15,7 @@ namespace SpecLint.Core.Spec.Schema;
 /// </summary>
 internal sealed partial class SchemaValidator
 {
-    private readonly Lazy<JsonSchema> _schema;
+    private readonly Lazy<LibrarySchema> _schema;
     private readonly Lazy<JsonNode> _schemaNodeLazy;
     private readonly QuickSchema? _quick;
 
@@ -30,7 +30,7 @@ internal sealed partial class SchemaValidator
         // The library's validator and the schema tree that words errors are built on the first document that the
         // quick check does not pass: a run of valid files never pays for them (most of a cold start's JIT).
         _schemaNodeLazy = new(() => JsonNode.Parse(Text)!);
-        _schema = new(() => JsonSchema.FromText(Text));
+        _schema = new(() => new LibrarySchema(Text));
     }
 
     /// <summary>True when the schema compiled for the quick check (tests hold it to the library's verdicts).</summary>
@@ -76,14 +76,14 @@ internal sealed partial class SchemaValidator
         lock (_gate)
         {
             using var doc = JsonDocument.Parse(root?.ToJsonString() ?? "null");
-            return _schema.Value.Evaluate(doc.RootElement, new EvaluationOptions { OutputFormat = OutputFormat.Flag }).IsValid;
+            return _schema.Value.Accepts(doc.RootElement);
         }
     }
 
     private ImmutableArray<SchemaViolation> ValidateAlone(JsonNode? root)
     {
         using var doc = JsonDocument.Parse(root?.ToJsonString() ?? "null");
-        var results = _schema.Value.Evaluate(doc.RootElement, new EvaluationOptions { OutputFormat = OutputFormat.List });
+        var results = _schema.Value.Evaluate(doc.RootElement);
         if (results.IsValid)
         {
             return [];
