@@ -106,6 +106,16 @@ public sealed class AgainstSettingsTests
         var md = File.ReadAllText(cli.Path_("out/report.md"));
         Assert.Contains(@"| ch-sw \[setting night\] | Phase margin |", md, StringComparison.Ordinal);
         Assert.DoesNotContain(@"\[setting day\]", md, StringComparison.Ordinal);
+
+        // One chart with a base-and-head pair of curves per setting.
+        Assert.Contains("](report-plots/ch-sw.change-loop-gain.svg)", md, StringComparison.Ordinal);
+        var loop = File.ReadAllText(cli.Path_("out/report-plots/ch-sw.change-loop-gain.svg"));
+        foreach (var series in new[] { "|T| day, base", "|T| day, this change", "|T| night, base", "|T| night, this change" })
+        {
+            Assert.Contains(series, loop, StringComparison.Ordinal);
+        }
+
+        Assert.Contains("total, night, base", File.ReadAllText(cli.Path_("out/report-plots/ch-sw.change-noise.svg")), StringComparison.Ordinal);
     }
 
     [Fact]
