@@ -100,12 +100,13 @@ public sealed class AgainstSettingsTests
         Assert.Equal(Compact(day.GetProperty("before")), Compact(change.GetProperty("before")));
 
         // The terminal and the report name the setting on each moved figure, and only night moved.
-        var text = cli.Run("check", "--against", "main", "--report", "out/report.md");
+        var text = cli.Run("check", "--against", "main", "--report", "out/report.md", "--html", "out/report.html");
         Assert.Matches(@"Phase margin: \d+\.\d° → \d+\.\d° \(−\d+\.\d°\) \[setting night\]", text.Out);
         Assert.DoesNotContain("[setting day", text.Out, StringComparison.Ordinal);
         var md = File.ReadAllText(cli.Path_("out/report.md"));
         Assert.Contains(@"| ch-sw \[setting night\] | Phase margin |", md, StringComparison.Ordinal);
         Assert.DoesNotContain(@"\[setting day\]", md, StringComparison.Ordinal);
+        Assert.Contains("ch-sw [setting night]", File.ReadAllText(cli.Path_("out/report.html")), StringComparison.Ordinal);
 
         // One chart with a base-and-head pair of curves per setting.
         Assert.Contains("](report-plots/ch-sw.change-loop-gain.svg)", md, StringComparison.Ordinal);
