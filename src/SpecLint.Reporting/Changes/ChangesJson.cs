@@ -1,3 +1,4 @@
+using System.Collections.Immutable;
 using System.Text.Json;
 using SpecLint.Reporting.Json;
 using SpecLint.Rules.Changes;
@@ -40,6 +41,7 @@ internal static class ChangesJson
             Findings(w, "unchanged", c.Findings.Unchanged, run);
             w.WriteEndObject();
             Findings(w, "baseProblems", c.BaseProblems, run);
+            Settings(w, c.Settings);
             w.WriteEndObject();
         }
 
@@ -51,6 +53,37 @@ internal static class ChangesJson
         {
             Findings(w, "baseNotes", changes.BaseNotes, run);
         }
+    }
+
+    /// <summary>
+    /// Each gain setting's figures, only for a channel with more than one gain (so a single-gain change keeps its
+    /// shape); the spec-level before and after stay the first setting's for readers written before settings.
+    /// </summary>
+    private static void Settings(Utf8JsonWriter w, ImmutableArray<SettingChange> settings)
+    {
+        if (settings.IsEmpty)
+        {
+            return;
+        }
+
+        w.WriteStartArray("settings");
+        foreach (var s in settings)
+        {
+            w.WriteStartObject();
+            w.WriteString("name", s.Name);
+            if (s.Status is { } status)
+            {
+                w.WriteString("status", status);
+            }
+
+            w.WriteStartObject("metrics");
+            Metrics(w, "before", s.MetricsBefore);
+            Metrics(w, "after", s.MetricsAfter);
+            w.WriteEndObject();
+            w.WriteEndObject();
+        }
+
+        w.WriteEndArray();
     }
 
     private static void Findings(Utf8JsonWriter w, string name, IEnumerable<Finding> findings, CheckRun run)

@@ -54,7 +54,7 @@ internal static class ChangesMarkdown
             yield return "|---|---|---:|---:|---:|";
             foreach (var (c, r) in deltas)
             {
-                yield return $"| {MarkdownText.Cell(c.Name)} | {r.Metric} | {MarkdownText.Cell(r.Before)} | {MarkdownText.Cell(r.After)} | {MarkdownText.Cell(r.Change)} |";
+                yield return $"| {MarkdownText.Cell(c.Name + r.SettingSuffix)} | {r.Metric} | {MarkdownText.Cell(r.Before)} | {MarkdownText.Cell(r.After)} | {MarkdownText.Cell(r.Change)} |";
             }
 
             yield return "";

@@ -27,7 +27,7 @@ internal static class ChangesText
                     $"  {c.Status.Name()} {c.File}{from}: {c.Findings.New.Length} new, {c.Findings.Resolved.Length} resolved, {c.Findings.Unchanged.Length} unchanged finding{(c.Findings.Unchanged.Length == 1 ? "" : "s")}");
                 foreach (var row in DeltaRows.For(c))
                 {
-                    yield return $"    {row.Metric}: {row.Before} → {row.After}{(row.Change.Length > 0 ? $" ({row.Change})" : "")}";
+                    yield return $"    {row.Metric}: {row.Before} → {row.After}{(row.Change.Length > 0 ? $" ({row.Change})" : "")}{row.SettingSuffix}";
                 }
 
                 foreach (var p in c.BaseProblems)

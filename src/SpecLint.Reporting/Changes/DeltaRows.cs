@@ -10,9 +10,22 @@ namespace SpecLint.Reporting.Changes;
 /// <param name="Before">The base value ("—" when there is none).</param>
 /// <param name="After">The head value ("—" when there is none).</param>
 /// <param name="Change">The difference, or "" when it cannot be computed.</param>
-internal sealed record DeltaRow(string Metric, string Before, string After, string Change);
+internal sealed record DeltaRow(string Metric, string Before, string After, string Change)
+{
+    /// <summary>The gain setting the row belongs to, or null for a spec with one gain.</summary>
+    public string? Setting { get; init; }
 
-/// <summary>The metric deltas of a changed spec, in the order a reviewer reads them; rows whose value did not change are left out.</summary>
+    /// <summary>"added" or "removed" when the setting is on one side only, else null.</summary>
+    public string? SettingStatus { get; init; }
+
+    /// <summary>" [setting night]" (with ", added" or ", removed"), or "" for one gain: the suffix findings also carry.</summary>
+    public string SettingSuffix => Setting is null ? "" : $" [setting {Setting}{(SettingStatus is null ? "" : ", " + SettingStatus)}]";
+}
+
+/// <summary>
+/// The metric deltas of a changed spec, in the order a reviewer reads them; rows whose value did not change are
+/// left out. A channel with more than one gain gets its rows setting by setting, each naming its setting.
+/// </summary>
 internal static class DeltaRows
 {
     private const string None = "—";
@@ -20,8 +33,19 @@ internal static class DeltaRows
     public static IEnumerable<DeltaRow> For(SpecChange change)
     {
         ArgumentNullException.ThrowIfNull(change);
-        var b = change.MetricsBefore;
-        var a = change.MetricsAfter;
+        var settings = change.Settings;
+        if (settings.IsEmpty)
+        {
+            return For(change.MetricsBefore, change.MetricsAfter);
+        }
+
+        // A setting whose figures are all the same on both sides shows nothing, not even the worst-corner row that a
+        // single-gain spec always shows once corners ran (its head cell names the corner, so the cells never match).
+        return settings.Where(s => !Equals(s.MetricsBefore, s.MetricsAfter)).SelectMany(s => For(s.MetricsBefore, s.MetricsAfter).Select(r => r with { Setting = s.Name, SettingStatus = s.Status }));
+    }
+
+    private static IEnumerable<DeltaRow> For(MetricSnapshot? b, MetricSnapshot? a)
+    {
         var rows = new[]
         {
             Row("Phase margin", b?.PhaseMarginDeg, a?.PhaseMarginDeg, MetricRows.Deg, Difference("°", "0.0")),

@@ -39,7 +39,7 @@ internal sealed record ReportData(
         ReportChanges? changes = run.Changes is { } c
             ? new ReportChanges(c.Ref, c.ShortBase, c.AllSpecs, run.Gate, [.. c.Specs.Select(s => new ReportChange(
                 s.File, s.PreviousFile, s.Name, s.Status, s.Findings.New, s.Findings.Resolved, s.Findings.Unchanged.Length, s.BaseProblems,
-                [.. DeltaRows.For(s)], () => ChangeCharts(s.Before?.Analysis, s.After?.Analysis, s.Name)))]) { BaseNotes = c.BaseNotes }
+                [.. DeltaRows.For(s)], () => ChangeCharts(s)))]) { BaseNotes = c.BaseNotes }
             : null;
         return new ReportData([.. run.Specs.Select(s => Spec(s, run.FailOn))], run.RunProblems, run.FailOn, run.ConfigFiles, [.. houseRules], run.ExitCode, changes);
     }
@@ -102,8 +102,19 @@ internal sealed record ReportData(
     private static IReadOnlyList<ReportChart> SpecCharts(Core.Analysis.AnalysisResult? analysis, string name) =>
         analysis is null ? [] : Draw(SpecPlots.Build(analysis, name), name);
 
-    private static IReadOnlyList<ReportChart> ChangeCharts(Core.Analysis.AnalysisResult? before, Core.Analysis.AnalysisResult? after, string name) =>
-        before is null || after is null ? [] : Draw(ChangePlots.Build(before, after, name), name);
+    /// <summary>Base and head drawn together, only when both versions were analysed; a curve pair per setting for more than one gain.</summary>
+    private static IReadOnlyList<ReportChart> ChangeCharts(Rules.Changes.SpecChange change)
+    {
+        if (change.Before?.Analysis is not { } before || change.After?.Analysis is not { } after)
+        {
+            return [];
+        }
+
+        var settings = change.Settings;
+        return settings.IsEmpty
+            ? Draw(ChangePlots.Build(before, after, change.Name), change.Name)
+            : Draw(ChangeSettingPlots.Build([.. settings.Select(x => (x.Name, x.Before?.Analysis, x.After?.Analysis))], change.Name), change.Name);
+    }
 
     private static List<ReportChart> Draw(IReadOnlyList<(string Suffix, Chart Chart)> charts, string name) =>
         [.. charts.Select(x => new ReportChart(x.Suffix, x.Chart.Title, SvgChartWriter.Write(x.Chart with { Id = PlotFiles.SafeName(name) + "-" + x.Suffix })))];

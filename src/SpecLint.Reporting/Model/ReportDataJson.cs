@@ -190,6 +190,13 @@ internal static class ReportDataJson
             w.WriteStringValue(d.Before);
             w.WriteStringValue(d.After);
             w.WriteStringValue(d.Change);
+            // A setting's row carries its setting; a single-gain row keeps the four strings shards wrote before settings.
+            if (d.Setting is not null)
+            {
+                w.WriteStringValue(d.Setting);
+                w.WriteStringValue(d.SettingStatus ?? "");
+            }
+
             w.WriteEndArray();
         }
 
@@ -266,7 +273,14 @@ internal static class ReportDataJson
         var charts = Charts(c);
         return new ReportChange(Text(c, "file"), c["previousFile"]?.GetValue<string>(), Text(c, "name"), status, Findings(c, "new"), Findings(c, "resolved"),
             c["unchanged"]?.GetValue<int>() ?? throw Damaged("unchanged"), Findings(c, "baseProblems"),
-            [.. Array(c, "deltas").Select(d => Row(d, 4)).Select(r => new DeltaRow(r[0], r[1], r[2], r[3]))], () => charts);
+            [.. Array(c, "deltas").Select(Delta)], () => charts);
+    }
+
+    private static DeltaRow Delta(JsonNode? node)
+    {
+        var r = node is JsonArray { Count: 6 } ? Row(node, 6) : Row(node, 4);
+        var row = new DeltaRow(r[0], r[1], r[2], r[3]);
+        return r.Length == 6 ? row with { Setting = r[4], SettingStatus = r[5].Length == 0 ? null : r[5] } : row;
     }
 
     private static ReportHouseRule HouseRule(JsonNode? node)

@@ -49,7 +49,8 @@ internal static class ChangePlots
         return [("change-loop-gain", loop), ("change-noise", noise)];
     }
 
-    private static (double[] MagnitudeDb, double[] PhaseDeg, double[] Noise) Curves(AnalysisResult analysis, double[] frequencies)
+    /// <summary>|T| in dB, ∠T in degrees and the total output noise density of <paramref name="analysis"/> at each frequency.</summary>
+    internal static (double[] MagnitudeDb, double[] PhaseDeg, double[] Noise) Curves(AnalysisResult analysis, double[] frequencies)
     {
         var model = new TiaModel(analysis.Circuit, analysis.Noise?.Temperature ?? analysis.Circuit.Temperature);
         var mag = new double[frequencies.Length];

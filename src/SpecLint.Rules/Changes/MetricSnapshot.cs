@@ -1,3 +1,5 @@
+using SpecLint.Core.Analysis;
+using SpecLint.Core.Analysis.Tolerance;
 using SpecLint.Rules.Checking;
 
 namespace SpecLint.Rules.Changes;
@@ -18,15 +20,19 @@ internal sealed record MetricSnapshot(
     double? OutputMaxV,
     double? Yield)
 {
-    /// <summary>The figures of an analysed spec, or null when it did not load or the analysis did not run.</summary>
-    public static MetricSnapshot? Of(SpecOutcome? outcome)
+    /// <summary>The figures of an analysed spec (for a channel with more than one gain, its first setting's), or null when it did not load or the analysis did not run.</summary>
+    public static MetricSnapshot? Of(SpecOutcome? outcome) => Of(outcome?.Analysis, outcome?.Tolerances);
+
+    /// <summary>The figures of one gain setting, or null when its analysis did not run.</summary>
+    public static MetricSnapshot? Of(SettingOutcome? setting) => Of(setting?.Analysis, setting?.Tolerances);
+
+    private static MetricSnapshot? Of(AnalysisResult? a, ToleranceResult? t)
     {
-        if (outcome?.Analysis is not { } a)
+        if (a is null)
         {
             return null;
         }
 
-        var t = outcome.Tolerances;
         return new MetricSnapshot(
             a.PhaseMargin?.Degrees,
             t?.PhaseMarginMin?.Degrees,

@@ -21,11 +21,14 @@ internal sealed record SpecChange(
     FindingClasses Findings,
     ImmutableArray<Finding> BaseProblems)
 {
-    /// <summary>The base figures, or null.</summary>
+    /// <summary>The base figures (for more than one gain, the first setting's), or null.</summary>
     public MetricSnapshot? MetricsBefore => MetricSnapshot.Of(Before);
 
-    /// <summary>The head figures, or null.</summary>
+    /// <summary>The head figures (for more than one gain, the first setting's), or null.</summary>
     public MetricSnapshot? MetricsAfter => MetricSnapshot.Of(After);
+
+    /// <summary>The gain settings of either version, paired by name; empty when neither has more than one gain.</summary>
+    public ImmutableArray<SettingChange> Settings => SettingChange.Pair(Before, After);
 
     /// <summary>The spec's name on the head, else at the base, else the file name.</summary>
     public string Name => After?.Spec?.Name ?? Before?.Spec?.Name ?? Path.GetFileName(File);
