@@ -1,0 +1,423 @@
+namespace SpecLint.Core.Analysis;
+
+/// <summary>
+/// Phase margin, −3 dB bandwidth and peaking of a plain circuit (no switch, wiper, unselected branch or access
+/// resistance) from polynomials in x = ω², without a scan: the fast path of corners and Monte Carlo.
+/// </summary>
+/// <remarks>
+/// <para>For the plain model (<see cref="TiaModel"/>) |T|² = (gf² + x·cf²) / ((gs² + x·cs²)(a0² + x·τt²)(1 + x·τ2²))
+/// and |Zt|² = 1/|D(jω)|², D(s) = c0 + c1·s + c2·s² + c3·s³ (<see cref="TiaModel.DenominatorCoefficients"/>), so
+/// |D(jω)|² = c0² + x(c1² − 2c0c2) + x²(c2² − 2c1c3) + x³c3². The crossings |T| = 1 are the positive roots of a cubic
+/// in x, and so are the −3 dB points; by Descartes' rule of signs (common practice) one sign change in the
+/// coefficients means exactly one positive root, so the full scan finds that root and no other, and a bracketed
+/// Newton iteration in x finds it too, from a bracket around a nearby point's root.</para>
+/// <para>d|D|²/dx is a quadratic, so |Zt|² has at most one interior maximum and the peak has a closed form. The
+/// full scan keeps the largest of its samples and refines around it, which is that maximum whenever samples fall
+/// where |Zt| exceeds its DC value; the fast path checks that they do.</para>
+/// <para>Whenever a sign is uncertain (two parts of a coefficient cancel), there may be more than one root, a root
+/// or the peak lies within two scan steps of the scan's ends, or the peak is too narrow for the scan to see,
+/// <see cref="TryFigures"/> declines and the caller runs the scan, so the figures stay those of the full analysis.</para>
+/// </remarks>
+internal readonly struct PlainLoop
+{
+    private const double TwoPi = 2 * Math.PI;
+
+    // A coefficient whose parts cancel to within this fraction of their size has no trusted sign.
+    private const double SignGuard = 1e-9;
+
+    // Newton stops once a step moves x by less than this fraction: the next error is about its square.
+    private const double StepTolerance = 1e-13;
+    private const int MaxIterations = 100;
+    private const int MaxWidenings = 80;
+
+    private readonly double _gf;
+    private readonly double _cf;
+    private readonly double _gsh;
+    private readonly double _cin;
+    private readonly double _a0;
+    private readonly double _tt;
+    private readonly double _t2;
+    private readonly double _c0;
+    private readonly double _c1;
+    private readonly double _c2;
+    private readonly double _c3;
+
+    private PlainLoop(Circuit c)
+    {
+        _gf = 1 / c.Rf.Ohms;
+        _cf = c.FeedbackCapacitance.Farads;
+        _gsh = c.Rsh is { } rsh ? 1 / rsh.Ohms : 0;
+        _cin = c.Cin.Farads;
+        _a0 = 1 / c.A0.Linear;
+        _tt = 1 / (TwoPi * c.Gbw.Hertz);
+        _t2 = c.SecondPole is { } p2 ? 1 / (TwoPi * p2.Hertz) : 0;
+        var gs = _gf + _gsh;
+        var cs = _cf + _cin;
+        _c0 = _gf + (gs * _a0);
+        _c1 = _cf + (gs * (_tt + (_a0 * _t2))) + (cs * _a0);
+        _c2 = (gs * _tt * _t2) + (cs * (_tt + (_a0 * _t2)));
+        _c3 = cs * _tt * _t2;
+    }
+
+    /// <summary>
+    /// The figures of <paramref name="circuit"/> as the full analysis finds them, or false when this path cannot
+    /// vouch for that (the caller then scans). Allocates nothing.
+    /// </summary>
+    /// <param name="circuit">A plain circuit (<see cref="Circuit.HasNetwork"/> false).</param>
+    /// <param name="pointsPerDecade">The full scan's density, which sets how close to its ends a root may lie.</param>
+    /// <param name="hint">Roots of a nearby point, or <see cref="LoopHint.None"/>.</param>
+    /// <param name="figures">Phase margin (degrees), bandwidth (Hz), peaking (dB).</param>
+    /// <param name="roots">ω² of this circuit's crossover and −3 dB point (0 where there is none), a hint for others.</param>
+    public static bool TryFigures(
+        Circuit circuit,
+        int pointsPerDecade,
+        in LoopHint hint,
+        out (double? PhaseMarginDeg, double? BandwidthHz, double PeakingDb) figures,
+        out LoopHint roots)
+    {
+        figures = default;
+        roots = default;
+        if (circuit.HasNetwork || !(circuit.Rf.Ohms > 0) || double.IsInfinity(circuit.Rf.Ohms)
+            || !(circuit.Gbw.Hertz > 0) || !(circuit.A0.Linear > 0))
+        {
+            return false;
+        }
+
+        var p = new PlainLoop(circuit);
+        var (wLo, wHi) = p.CharacteristicRange();
+        var uLo = Math.Log(wLo / 1e3);
+        var uHi = Math.Log(wHi * 1e3);
+        var du = Math.Max(Math.Log(10) / pointsPerDecade, (uHi - uLo) / 100_000);
+        if (!double.IsFinite(du) || !(du > 0) || !double.IsFinite(uLo))
+        {
+            return false;
+        }
+
+        var n = (int)Math.Min(Math.Ceiling((uHi - uLo) / du), 100_000);
+        if (n < 6)
+        {
+            return false;
+        }
+
+        // Roots this far inside the scan's span are bracketed by it, away from its first and last points.
+        var xMin = Math.Exp(2 * (uLo + (2 * du)));
+        var xMax = Math.Exp(2 * (uLo + ((n - 2) * du)));
+        var guess = wLo * wHi;
+
+        if (!p.TryCrossover(hint.CrossoverOmegaSquared > 0 ? hint.CrossoverOmegaSquared : guess, xMin, xMax, out var pm, out var xc)
+            || !p.TryBandwidth(hint.BandwidthOmegaSquared > 0 ? hint.BandwidthOmegaSquared : guess, xMin, xMax, out var xb)
+            || !p.TryPeaking(xMin, xMax, Math.Exp(2 * du), out var peakingDb))
+        {
+            return false;
+        }
+
+        figures = (pm, xb > 0 ? Math.Sqrt(xb) / TwoPi : null, peakingDb);
+        roots = new LoopHint(xc, xb);
+        return true;
+    }
+
+    /// <summary>The same span as <see cref="TiaModel.CharacteristicRange"/> for a plain circuit.</summary>
+    private (double Low, double High) CharacteristicRange()
+    {
+        var lo = double.PositiveInfinity;
+        var hi = 0.0;
+        var wt = 1 / _tt;
+        Take(wt, ref lo, ref hi);
+        Take(wt * _a0, ref lo, ref hi);
+        if (_t2 > 0)
+        {
+            Take(1 / _t2, ref lo, ref hi);
+        }
+
+        if (_cf > 0)
+        {
+            Take(_gf / _cf, ref lo, ref hi);
+        }
+
+        if (_cf + _cin > 0)
+        {
+            Take((_gf + _gsh) / (_cf + _cin), ref lo, ref hi);
+        }
+
+        return (lo, hi);
+    }
+
+    private static void Take(double w, ref double lo, ref double hi)
+    {
+        if (w > 0 && !double.IsInfinity(w))
+        {
+            lo = Math.Min(lo, w);
+            hi = Math.Max(hi, w);
+        }
+    }
+
+    /// <summary>The phase margin at the only falling crossing, or null when the loop has none.</summary>
+    private bool TryCrossover(double guess, double xMin, double xMax, out double? pm, out double xc)
+    {
+        pm = null;
+        xc = 0;
+        double gs = _gf + _gsh, cs = _cf + _cin;
+        double a = gs * gs, b = cs * cs, c = _a0 * _a0, d = _tt * _tt, e = _t2 * _t2;
+        // Den − Num of |T|², ascending powers of x; the two highest have no negative part.
+        var d1 = (a * d) + (b * c) + (a * c * e);
+        var s0 = Sign((a * c) - (_gf * _gf), (a * c) + (_gf * _gf));
+        var s1 = Sign(d1 - (_cf * _cf), d1 + (_cf * _cf));
+        var s2 = Sign((b * d) + (((a * d) + (b * c)) * e), 0);
+        var s3 = Sign(b * d * e, 0);
+        if (s0 == 0 || s0 == Uncertain || s1 == Uncertain)
+        {
+            return false;
+        }
+
+        var changes = SignChanges(s0, s1, s2, s3);
+        if (changes == 0 || (changes == 1 && s0 > 0))
+        {
+            // |T| stays on one side of 1, or rises through it once and never falls back.
+            return true;
+        }
+
+        if (changes != 1 || !Solve(Excess.Loop, guess, out xc) || xc < xMin || xc > xMax)
+        {
+            return false;
+        }
+
+        // As TiaModel.LoopGainPhaseRadians and Angle arithmetic evaluate it.
+        var w = Math.Sqrt(xc);
+        var phase = Math.Atan(w * _cf / _gf)
+            - Math.Atan(w * (_cf + _cin) / (_gf + _gsh))
+            - Math.Atan2(w * _tt, _a0)
+            - Math.Atan(w * _t2);
+        pm = ((180 * Math.PI / 180) + phase) * 180 / Math.PI;
+        return true;
+    }
+
+    /// <summary>ω² of the only −3 dB point, or 0 when |Zt| never falls that far.</summary>
+    private bool TryBandwidth(double guess, double xMin, double xMax, out double xb)
+    {
+        xb = 0;
+        var s1 = Sign((_c1 * _c1) - (2 * _c0 * _c2), (_c1 * _c1) + (2 * _c0 * _c2));
+        var s2 = Sign((_c2 * _c2) - (2 * _c1 * _c3), (_c2 * _c2) + (2 * _c1 * _c3));
+        var s3 = Sign(_c3 * _c3, 0);
+        if (s1 == Uncertain || s2 == Uncertain)
+        {
+            return false;
+        }
+
+        var changes = SignChanges(-1, s1, s2, s3);
+        if (changes == 0)
+        {
+            return true;
+        }
+
+        return changes == 1 && Solve(Excess.Band, guess, out xb) && xb >= xMin && xb <= xMax;
+    }
+
+    /// <summary>
+    /// Peaking at the minimum of |D|², when the scan's samples see it: the region where |Zt| exceeds its DC value
+    /// reaches at least one scan step either side of the peak (<paramref name="step"/> is that step as a factor in x).
+    /// </summary>
+    private bool TryPeaking(double xMin, double xMax, double step, out double peakingDb)
+    {
+        peakingDb = 0;
+        var e1 = (_c1 * _c1) - (2 * _c0 * _c2);
+        var e2 = (_c2 * _c2) - (2 * _c1 * _c3);
+        var e3 = _c3 * _c3;
+
+        // The minimum of |D|² is where its slope e1 + 2e2·x + 3e3·x² turns from falling to rising.
+        double xs;
+        if (e3 > 0)
+        {
+            var disc = (e2 * e2) - (3 * e1 * e3);
+            if (!(disc >= 0))
+            {
+                return true;
+            }
+
+            var sq = Math.Sqrt(disc);
+            xs = e2 > 0 ? -e1 / (e2 + sq) : (sq - e2) / (3 * e3);
+        }
+        else if (e2 > 0 && e1 < 0)
+        {
+            xs = -e1 / (2 * e2);
+        }
+        else
+        {
+            return true;
+        }
+
+        if (!(xs > 0) || double.IsInfinity(xs))
+        {
+            return true;
+        }
+
+        var dMin = Band(xs);
+        var zt0 = Math.Sqrt(1 / (_c0 * _c0));
+        var db = (Math.Log(1 / dMin) - Math.Log(zt0 * zt0)) * 10 / Math.Log(10);
+        if (!(db > 0))
+        {
+            return true;
+        }
+
+        // Where |D|² < c0²: x·(e1 + e2·x + e3·x²) < 0.
+        double xa, xz;
+        if (e3 > 0)
+        {
+            var disc = (e2 * e2) - (4 * e1 * e3);
+            var sq = Math.Sqrt(Math.Max(disc, 0));
+            var q = -0.5 * (e2 + (e2 >= 0 ? sq : -sq));
+            var r1 = q / e3;
+            var r2 = q != 0 ? e1 / q : 0;
+            (xa, xz) = e1 < 0 ? (0, Math.Max(r1, r2)) : (Math.Min(r1, r2), Math.Max(r1, r2));
+        }
+        else
+        {
+            (xa, xz) = (0, -e1 / e2);
+        }
+
+        if (xs < xMin || xs > xMax || !(xa < xs / step) || !(xz > xs * step))
+        {
+            return false;
+        }
+
+        peakingDb = db;
+        return true;
+    }
+
+    private const int Uncertain = 2;
+
+    /// <summary>Sign of a difference whose parts sum to <paramref name="scale"/>; uncertain when they nearly cancel.</summary>
+    private static int Sign(double value, double scale) =>
+        Math.Abs(value) <= SignGuard * scale && scale > 0 ? Uncertain : Math.Sign(value);
+
+    private static int SignChanges(int s0, int s1, int s2, int s3)
+    {
+        var changes = 0;
+        var last = s0;
+        foreach (var s in (ReadOnlySpan<int>)[s1, s2, s3])
+        {
+            if (s != 0)
+            {
+                changes += s != last ? 1 : 0;
+                last = s;
+            }
+        }
+
+        return changes;
+    }
+
+    private enum Excess
+    {
+        Loop,
+        Band,
+    }
+
+    /// <summary>|D(jω)|² written out, as accurate as the complex evaluation.</summary>
+    private double Band(double x)
+    {
+        var re = _c0 - (_c2 * x);
+        var im = _c1 - (_c3 * x);
+        return (re * re) + (x * im * im);
+    }
+
+    /// <summary>Negative below the root and positive above (the sign analysis proved one root), with its slope in x.</summary>
+    private double Evaluate(Excess which, double x, out double slope)
+    {
+        if (which == Excess.Band)
+        {
+            var re = _c0 - (_c2 * x);
+            var im = _c1 - (_c3 * x);
+            slope = (-2 * _c2 * re) + (im * im) - (2 * _c3 * x * im);
+            return (re * re) + (x * im * im) - (2 * _c0 * _c0);
+        }
+
+        double gs = _gf + _gsh, cs = _cf + _cin;
+        var f1 = (gs * gs) + (x * cs * cs);
+        var f2 = (_a0 * _a0) + (x * _tt * _tt);
+        var f3 = 1 + (x * _t2 * _t2);
+        slope = (cs * cs * f2 * f3) + (f1 * _tt * _tt * f3) + (f1 * f2 * _t2 * _t2) - (_cf * _cf);
+        return (f1 * f2 * f3) - ((_gf * _gf) + (x * _cf * _cf));
+    }
+
+    /// <summary>
+    /// The one positive root: a bracket grown geometrically from <paramref name="guess"/> until the signs differ,
+    /// then Newton steps, bisecting in ln x whenever a step would leave the bracket.
+    /// </summary>
+    private bool Solve(Excess which, double guess, out double root)
+    {
+        root = guess;
+        var f = Evaluate(which, guess, out _);
+        if (f == 0)
+        {
+            return true;
+        }
+
+        double lo, hi;
+        if (f < 0)
+        {
+            lo = guess;
+            hi = guess * 1.1;
+            for (var i = 0; Evaluate(which, hi, out _) < 0; i++)
+            {
+                if (i == MaxWidenings)
+                {
+                    return false;
+                }
+
+                lo = hi;
+                hi *= 4;
+            }
+        }
+        else
+        {
+            hi = guess;
+            lo = guess / 1.1;
+            for (var i = 0; Evaluate(which, lo, out _) > 0; i++)
+            {
+                if (i == MaxWidenings)
+                {
+                    return false;
+                }
+
+                hi = lo;
+                lo /= 4;
+            }
+        }
+
+        var x = guess;
+        for (var i = 0; i < MaxIterations; i++)
+        {
+            f = Evaluate(which, x, out var slope);
+            if (f == 0)
+            {
+                root = x;
+                return true;
+            }
+
+            if (f < 0)
+            {
+                lo = Math.Max(lo, x);
+            }
+            else
+            {
+                hi = Math.Min(hi, x);
+            }
+
+            var next = x - (f / slope);
+            if (!(next > lo && next < hi))
+            {
+                next = Math.Sqrt(lo * hi);
+            }
+
+            if (Math.Abs(next - x) <= StepTolerance * x || hi - lo <= 4e-16 * hi)
+            {
+                root = next;
+                return true;
+            }
+
+            x = next;
+        }
+
+        root = x;
+        return true;
+    }
+}
