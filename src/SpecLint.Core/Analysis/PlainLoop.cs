@@ -29,6 +29,13 @@ internal readonly struct PlainLoop
     private const double StepTolerance = 1e-13;
     private const int MaxIterations = 100;
     private const int MaxWidenings = 80;
+    private const double MinMarginDeg = 0.01;
+
+    // A peak within this of 0 dB may or may not show in the scan's samples: the scan decides those.
+    private const double PeakBoundaryDb = 1e-9;
+
+    // Relative distance from the DC value of |Zt|² beyond which rounding cannot lift a sample above it.
+    private const double NearDcBand = 1e-12;
 
     private readonly double _gf;
     private readonly double _cf;
@@ -106,7 +113,7 @@ internal readonly struct PlainLoop
 
         if (!p.TryCrossover(hint.CrossoverOmegaSquared > 0 ? hint.CrossoverOmegaSquared : guess, xMin, xMax, out var pm, out var xc)
             || !p.TryBandwidth(hint.BandwidthOmegaSquared > 0 ? hint.BandwidthOmegaSquared : guess, xMin, xMax, out var xb)
-            || !p.TryPeaking(xMin, xMax, Math.Exp(2 * du), out var peakingDb))
+            || !p.TryPeaking(uLo, du, n, xMin, xMax, Math.Exp(2 * du), out var peakingDb))
         {
             return false;
         }
@@ -188,7 +195,10 @@ internal readonly struct PlainLoop
             - Math.Atan2(w * _tt, _a0)
             - Math.Atan(w * _t2);
         pm = ((180 * Math.PI / 180) + phase) * 180 / Math.PI;
-        return true;
+
+        // The scan's refinement stops within about 1e-14 in ln ω, some 1e-14 degrees of margin: relative to a
+        // margin within a hundredth of a degree of 0° that is no longer small, so those go to the scan.
+        return Math.Abs(pm.Value) >= MinMarginDeg;
     }
 
     /// <summary>ω² of the only −3 dB point, or 0 when |Zt| never falls that far.</summary>
@@ -213,10 +223,11 @@ internal readonly struct PlainLoop
     }
 
     /// <summary>
-    /// Peaking at the minimum of |D|², when the scan's samples see it: the region where |Zt| exceeds its DC value
-    /// reaches at least one scan step either side of the peak (<paramref name="step"/> is that step as a factor in x).
+    /// Peaking at the minimum of |D|² when there is a real peak and the scan's samples see it: the region where |Zt|
+    /// exceeds its DC value reaches at least one scan step either side of the peak (<paramref name="step"/> is that
+    /// step as a factor in x). Without a peak, what the scan makes of rounding next to DC (<see cref="NearDcPeaking"/>).
     /// </summary>
-    private bool TryPeaking(double xMin, double xMax, double step, out double peakingDb)
+    private bool TryPeaking(double uLo, double du, int n, double xMin, double xMax, double step, out double peakingDb)
     {
         peakingDb = 0;
         var e1 = (_c1 * _c1) - (2 * _c0 * _c2);
@@ -224,38 +235,38 @@ internal readonly struct PlainLoop
         var e3 = _c3 * _c3;
 
         // The minimum of |D|² is where its slope e1 + 2e2·x + 3e3·x² turns from falling to rising.
-        double xs;
+        var xs = 0.0;
         if (e3 > 0)
         {
             var disc = (e2 * e2) - (3 * e1 * e3);
-            if (!(disc >= 0))
+            if (disc >= 0)
             {
-                return true;
+                var sq = Math.Sqrt(disc);
+                xs = e2 > 0 ? -e1 / (e2 + sq) : (sq - e2) / (3 * e3);
             }
-
-            var sq = Math.Sqrt(disc);
-            xs = e2 > 0 ? -e1 / (e2 + sq) : (sq - e2) / (3 * e3);
         }
         else if (e2 > 0 && e1 < 0)
         {
             xs = -e1 / (2 * e2);
         }
-        else
-        {
-            return true;
-        }
 
         if (!(xs > 0) || double.IsInfinity(xs))
         {
+            peakingDb = NearDcPeaking(uLo, du, n);
             return true;
         }
 
         var dMin = Band(xs);
-        var zt0 = Math.Sqrt(1 / (_c0 * _c0));
-        var db = (Math.Log(1 / dMin) - Math.Log(zt0 * zt0)) * 10 / Math.Log(10);
-        if (!(db > 0))
+        var db = (Math.Log(1 / dMin) - Math.Log(1 / (_c0 * _c0))) * 10 / Math.Log(10);
+        if (db <= -PeakBoundaryDb)
         {
+            peakingDb = NearDcPeaking(uLo, du, n);
             return true;
+        }
+
+        if (db < PeakBoundaryDb)
+        {
+            return false;
         }
 
         // Where |D|² < c0²: x·(e1 + e2·x + e3·x²) < 0.
@@ -281,6 +292,87 @@ internal readonly struct PlainLoop
 
         peakingDb = db;
         return true;
+    }
+
+    /// <summary>
+    /// The scan's peaking for a response with no peak: next to DC, |Zt|² differs from its DC value by less than
+    /// rounding, and the scan keeps any sample that rounds above it and refines around it (a few 1e-14 dB). Replayed
+    /// here with the scan's own arithmetic over those samples only, so corners pick the same point on such ties.
+    /// </summary>
+    private double NearDcPeaking(double uLo, double du, int n)
+    {
+        var zt0 = Math.Sqrt(ScanMagnitudeSquared(0));
+        var dcSq = zt0 * zt0;
+        var peakSq = dcSq;
+        var floor = dcSq * (1 - NearDcBand);
+        var peakIndex = -1;
+        for (var i = 1; i <= n; i++)
+        {
+            var z2 = ScanMagnitudeSquared(Math.Exp(uLo + (i * du)));
+            if (z2 > peakSq)
+            {
+                peakSq = z2;
+                peakIndex = i;
+            }
+            else if (z2 < floor)
+            {
+                // Past rounding: without a peak |Zt| does not come back this close to its DC value.
+                break;
+            }
+        }
+
+        if (peakIndex <= 0)
+        {
+            return 0;
+        }
+
+        var logPeak = GoldenMaxLog(uLo + ((peakIndex - 1) * du), uLo + ((peakIndex + 1) * du));
+        return Math.Max(0, (logPeak - Math.Log(dcSq)) * 10 / Math.Log(10));
+    }
+
+    /// <summary>TiaModel.TransimpedanceMagnitudeSquared for a plain circuit, operation for operation.</summary>
+    private double ScanMagnitudeSquared(double w)
+    {
+        var b = w * _tt;
+        var c = w * _t2;
+        var iaRe = _a0 - (b * c);
+        var iaIm = b + (_a0 * c);
+        var sr = _gf + _gsh;
+        var si = w * (_cf + _cin);
+        var dr = _gf + (sr * iaRe) - (si * iaIm);
+        var di = (w * _cf) + (sr * iaIm) + (si * iaRe);
+        return 1 / ((dr * dr) + (di * di));
+    }
+
+    /// <summary>The scan's golden-section search for the largest ln|Zt|² on [a, b], step for step.</summary>
+    private double GoldenMaxLog(double a, double b)
+    {
+        var invPhi = (Math.Sqrt(5) - 1) / 2;
+        var c = b - (invPhi * (b - a));
+        var d = a + (invPhi * (b - a));
+        var fc = Math.Log(ScanMagnitudeSquared(Math.Exp(c)));
+        var fd = Math.Log(ScanMagnitudeSquared(Math.Exp(d)));
+        for (var i = 0; i < 40; i++)
+        {
+            if (fc > fd)
+            {
+                b = d;
+                d = c;
+                fd = fc;
+                c = b - (invPhi * (b - a));
+                fc = Math.Log(ScanMagnitudeSquared(Math.Exp(c)));
+            }
+            else
+            {
+                a = c;
+                c = d;
+                fc = fd;
+                d = a + (invPhi * (b - a));
+                fd = Math.Log(ScanMagnitudeSquared(Math.Exp(d)));
+            }
+        }
+
+        return fc > fd ? fc : fd;
     }
 
     private const int Uncertain = 2;

@@ -10,7 +10,7 @@ namespace SpecLint.Core.Analysis;
 /// </summary>
 /// <remarks>
 /// Method: a log-spaced scan over 10⁻³·(lowest) .. 10³·(highest) characteristic frequency brackets every
-/// |T| = 1 crossing and the −3 dB fall, and MathNet's Brent solver refines each bracket to 1e-12 in ln f.
+/// |T| = 1 crossing and the −3 dB fall, and MathNet's Brent solver refines each bracket to 1e-14 in ln f.
 /// Between scan points, bounds on how fast |T| can change decide where a pair of crossings could hide, and
 /// only there is the interval split further, so no crossing slips between points.
 /// The phase comes from summed pole and zero angles, so it is unwrapped from DC by construction (docs/references.md
@@ -18,7 +18,9 @@ namespace SpecLint.Core.Analysis;
 /// </remarks>
 public static class TiaAnalyzer
 {
-    private const double RootAccuracy = 1e-12;
+    // Near the rounding of ln ω itself (about 4e-15 at ln ω ≈ 20), so the polynomial fast path (PlainLoop), which
+    // converges to the last bits, finds the same roots, and phase margins near 0° keep their relative accuracy.
+    private const double RootAccuracy = 1e-14;
     private const int RootIterations = 200;
     private const double ScanMargin = 1e3;
     private const int MaxScanPoints = 100_000;

@@ -9,13 +9,16 @@ using SpecLint.Core.Units;
 namespace SpecLint.Core.Tests.Tolerance;
 
 /// <summary>
-/// The loop-only path corners and Monte Carlo use (<see cref="TiaAnalyzer.LoopFigures(Circuit, int)"/>) against the full
-/// analysis: phase margin, bandwidth and peaking agree to 1e-9 relative (peaking also to 1e-12 dB, the rounding
-/// noise of a flat response), and a figure is absent on one path exactly when it is absent on the other.
+/// The loop-only path corners and Monte Carlo use (<see cref="TiaAnalyzer.LoopFigures(Circuit, int)"/>: the
+/// polynomial fast path <see cref="PlainLoop"/>, else the scan) against the full analysis: phase margin, bandwidth
+/// and peaking agree to 1e-11 relative (peaking also to 1e-12 dB, the rounding noise of a flat response), and a
+/// figure is absent on one path exactly when it is absent on the other. The worst disagreement seen is about 1e-12
+/// (a margin of a fraction of a degree, with the scan's refinement tolerance of 1e-14 in ln ω); the JSON output
+/// tests allow 1e-9.
 /// </summary>
 public sealed class LoopFiguresTests
 {
-    private const double Relative = 1e-9;
+    private const double Relative = 1e-11;
     private const double PeakingNoiseDb = 1e-12;
 
     [Fact]
@@ -196,8 +199,8 @@ public sealed class LoopFiguresTests
     [Fact]
     public void The_comparison_fails_on_a_figure_off_by_more_than_the_tolerance()
     {
-        Assert.True(Close(100, 100 * (1 + 1e-10), 0));
-        Assert.False(Close(100, 100 * (1 + 1e-8), 0));
+        Assert.True(Close(100, 100 * (1 + 1e-12), 0));
+        Assert.False(Close(100, 100 * (1 + 1e-10), 0));
         Assert.True(Close(0, 1e-13, PeakingNoiseDb));
         Assert.False(Close(0, 1e-9, PeakingNoiseDb));
     }
