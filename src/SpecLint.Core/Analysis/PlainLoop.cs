@@ -34,8 +34,9 @@ internal readonly struct PlainLoop
     // A peak within this of 0 dB may or may not show in the scan's samples: the scan decides those.
     private const double PeakBoundaryDb = 1e-9;
 
-    // Relative distance from the DC value of |Zt|² beyond which rounding cannot lift a sample above it.
-    private const double NearDcBand = 1e-12;
+    // Relative distance from the DC value of |Zt|² beyond which rounding (a few 1e-16 near DC) cannot lift a
+    // sample above it.
+    private const double NearDcBand = 1e-14;
 
     private readonly double _gf;
     private readonly double _cf;
