@@ -72,7 +72,8 @@ public sealed class NoiseGainBelowMinimumStableRule : IRule
         [
             new(Info.Id, string.Create(CultureInfo.InvariantCulture, $"noise gain ≥ {gmin:0.##}"), edited => WorstNoiseGain(edited) >= gmin),
             new(PhaseMarginBelowFloorRule.Info.Id, string.Create(CultureInfo.InvariantCulture, $"phase margin ≥ {floor.Degrees:0.#}°"),
-                edited => context.Reanalyze(edited).WorstPhaseMarginDeg is { } pm && pm >= floor.Degrees),
+                edited => context.ReanalyzeNominal(edited).Analysis.PhaseMargin is { } n && n.Degrees >= floor.Degrees
+                    && context.Reanalyze(edited).WorstPhaseMarginDeg is { } pm && pm >= floor.Degrees),
         ];
         return StandardValueSearch.Search(context, series, start, upward: false, cf => SpecEdits.WithCf(spec, new Capacitance(cf)), conditions, steps: 6);
     }

@@ -81,7 +81,7 @@ public sealed class OutputOutsideRailsRule : IRule
         var start = DesignHelpers.LargestRfForHeadroom(worstRails, context.OptionOf<Voltage>(Info, Margin.Key)) is { } r && double.IsFinite(r.Ohms) ? r.Ohms : spec.Feedback.Resistance.Typ.Ohms;
         FixCondition[] conditions =
         [
-            new(Info.Id, $"output inside {Fmt.Q(span.Low)} .. {Fmt.Q(span.High)}", edited => Fits(context.Reanalyze(edited).Analysis.Output, span)),
+            new(Info.Id, $"output inside {Fmt.Q(span.Low)} .. {Fmt.Q(span.High)}", edited => Fits(context.ReanalyzeNominal(edited).Analysis.Output, span)),
         ];
         return StandardValueSearch.Search(context, series, Math.Min(start, spec.Feedback.Resistance.Typ.Ohms), upward: false,
             c => SpecEdits.WithRf(spec, new Resistance(c)), conditions, steps: 24);

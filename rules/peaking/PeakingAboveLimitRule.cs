@@ -56,6 +56,12 @@ public sealed class PeakingAboveLimitRule : IRule
         [
             new(Info.Id, string.Create(CultureInfo.InvariantCulture, $"peaking ≤ {limitDb:0.#} dB"), edited =>
             {
+                // The nominal peak is tested first: the worst corner is never lower, and the corners cost far more.
+                if (context.ReanalyzeNominal(edited).Analysis.PeakingDb > limitDb)
+                {
+                    return false;
+                }
+
                 var r = context.Reanalyze(edited);
                 return Math.Max(r.Analysis.PeakingDb, r.Tolerances?.PeakingDbMax ?? double.NegativeInfinity) <= limitDb;
             }),

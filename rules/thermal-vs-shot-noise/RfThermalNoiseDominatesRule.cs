@@ -40,7 +40,7 @@ public sealed class RfThermalNoiseDominatesRule : IRule
         FixCondition[] conditions =
         [
             new(OutputOutsideRailsRule.Info.Id, $"output inside {Fmt.Q(span.Low)} .. {Fmt.Q(span.High)}",
-                edited => OutputOutsideRailsRule.Fits(context.Reanalyze(edited).Analysis.Output, span)),
+                edited => OutputOutsideRailsRule.Fits(context.ReanalyzeNominal(edited).Analysis.Output, span)),
         ];
         var search = StandardValueSearch.Search(context, series, needed, upward: true, c => SpecEdits.WithRf(spec, new Resistance(c)), conditions, steps: 1);
         var found = search.Value;

@@ -99,7 +99,7 @@ internal sealed class RcAdmittance
         return [.. zeros];
     }
 
-    /// <summary>The single zero in (a, b) where Y(−σ) falls from above 0 to below it; bisection in ln σ.</summary>
+    /// <summary>The single zero in (a, b) where Y(−σ) falls from above 0 to below it, bracketed in ln σ.</summary>
     private double ZeroBetween(double a, double b)
     {
         // Two branches sharing a pole: the zero between them sits on it.
@@ -155,18 +155,73 @@ internal sealed class RcAdmittance
         return Bisect(lo, hi);
     }
 
+    /// <summary>
+    /// The zero of Y(−σ) in (lo, hi), where it falls from above 0 to below it: false position in ln σ with the
+    /// Illinois halving (a stalled end's value is halved), so it converges in about ten steps instead of the fifty
+    /// or more of bisection; a step that does not shrink the bracket by a quarter is replaced by a bisection, so it
+    /// can never be slower than bisection by more than that.
+    /// </summary>
     private double Bisect(double lo, double hi)
     {
+        double u0 = Math.Log(lo), u1 = Math.Log(hi);
+        double f0 = OnAxis(lo), f1 = OnAxis(hi);
+        var side = 0;
         for (var k = 0; k < 200 && hi > lo * (1 + 4e-16); k++)
         {
-            var mid = Math.Sqrt(lo * hi);
-            if (OnAxis(mid) > 0)
+            var width = u1 - u0;
+            var u = double.IsFinite(f0) && double.IsFinite(f1) && f0 > 0 && f1 < 0 ? u0 + (width * f0 / (f0 - f1)) : double.NaN;
+            if (!(u > u0 + (width / 64) && u < u1 - (width / 64)))
             {
-                lo = mid;
+                u = u0 + (width / 2);
+                side = 0;
+            }
+
+            var mid = Math.Exp(u);
+            if (!(mid > lo && mid < hi))
+            {
+                mid = Math.Sqrt(lo * hi);
+                u = Math.Log(mid);
+            }
+
+            var f = OnAxis(mid);
+            if (f == 0)
+            {
+                return mid;
+            }
+
+            if (f > 0)
+            {
+                (lo, u0, f0) = (mid, u, f);
+                f1 = side == -1 ? f1 / 2 : f1;
+                side = -1;
             }
             else
             {
-                hi = mid;
+                (hi, u1, f1) = (mid, u, f);
+                f0 = side == 1 ? f0 / 2 : f0;
+                side = 1;
+            }
+
+            // A step that left most of the bracket in place: bisect once so the bracket keeps shrinking.
+            if (u1 - u0 > 0.75 * width)
+            {
+                var m = Math.Sqrt(lo * hi);
+                var fm = OnAxis(m);
+                if (fm == 0)
+                {
+                    return m;
+                }
+
+                if (fm > 0)
+                {
+                    (lo, u0, f0) = (m, Math.Log(m), fm);
+                }
+                else
+                {
+                    (hi, u1, f1) = (m, Math.Log(m), fm);
+                }
+
+                side = 0;
             }
         }
 

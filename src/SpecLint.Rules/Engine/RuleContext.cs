@@ -72,6 +72,14 @@ public sealed class RuleContext
     public SpecAnalysis Reanalyze(TiaSpec changed, bool includeNoise = false) =>
         _analyzer.Analyze(changed, includeNoise, includeCorners: Current.Tolerances is not null);
 
+    /// <summary>
+    /// Analyses a changed spec at its nominal values only, without the corner search. Cheap: a fix search uses it
+    /// to reject a candidate whose nominal figure already fails (a worst case is never better than nominal) before
+    /// paying for <see cref="Reanalyze"/>, and for figures that do not depend on corners (the DC output).
+    /// </summary>
+    public SpecAnalysis ReanalyzeNominal(TiaSpec changed, bool includeNoise = false) =>
+        _analyzer.Analyze(changed, includeNoise, includeCorners: false);
+
     /// <summary>The value of one of this rule's options in SI: the configured value, or the declared default.</summary>
     public double OptionSi(string key) => OptionSi(_descriptor, _configuration, key);
 

@@ -48,7 +48,9 @@ public static class CfForFloor
         SpecAnalysis Of(TiaSpec s) => analysed.TryGetValue(s, out var a) ? a : analysed[s] = context.Reanalyze(s);
         var conditions = new List<FixCondition>
         {
-            new(BuiltIn.PhaseMarginBelowFloorRule.Info.Id, $"phase margin ≥ {Fmt.Q(floor)}", s => Of(s).WorstPhaseMarginDeg is { } w && w >= floor.Degrees),
+            // The nominal margin is tested first: the worst corner is never better, and the corners cost far more.
+            new(BuiltIn.PhaseMarginBelowFloorRule.Info.Id, $"phase margin ≥ {Fmt.Q(floor)}", s => context.ReanalyzeNominal(s).Analysis.PhaseMargin is { } n && n.Degrees >= floor.Degrees
+                && Of(s).WorstPhaseMarginDeg is { } w && w >= floor.Degrees),
         };
         if (alsoRequire is not null)
         {
