@@ -16,7 +16,7 @@ namespace SpecLint.Core.Analysis;
 /// where |Zt| exceeds its DC value; the fast path checks that they do.</para>
 /// <para>Whenever a sign is uncertain (two parts of a coefficient cancel), there may be more than one root, a root
 /// or the peak lies within two scan steps of the scan's ends, or the peak is too narrow for the scan to see,
-/// <see cref="TryFigures"/> declines and the caller runs the scan, so the figures stay those of the full analysis.</para>
+/// <c>TryFigures</c> declines and the caller runs the scan, so the figures stay those of the full analysis.</para>
 /// </remarks>
 internal readonly struct PlainLoop
 {
@@ -50,22 +50,34 @@ internal readonly struct PlainLoop
     private readonly double _c2;
     private readonly double _c3;
 
-    private PlainLoop(Circuit c)
+    /// <summary>The loop of a plain circuit from its values in SI (as <see cref="Circuit"/> holds them).</summary>
+    /// <param name="rf">Rf.</param>
+    /// <param name="feedbackCapacitance">Cf + Cpar.</param>
+    /// <param name="rsh">Rsh, or null for none.</param>
+    /// <param name="cin">Everything from the node to AC ground.</param>
+    /// <param name="a0">The op-amp's DC gain, linear.</param>
+    /// <param name="gbw">Gain-bandwidth product, Hz.</param>
+    /// <param name="secondPole">Second pole, Hz, or null.</param>
+    public PlainLoop(double rf, double feedbackCapacitance, double? rsh, double cin, double a0, double gbw, double? secondPole)
     {
-        _gf = 1 / c.Rf.Ohms;
-        _cf = c.FeedbackCapacitance.Farads;
-        _gsh = c.Rsh is { } rsh ? 1 / rsh.Ohms : 0;
-        _cin = c.Cin.Farads;
-        _a0 = 1 / c.A0.Linear;
-        _tt = 1 / (TwoPi * c.Gbw.Hertz);
-        _t2 = c.SecondPole is { } p2 ? 1 / (TwoPi * p2.Hertz) : 0;
+        _gf = 1 / rf;
+        _cf = feedbackCapacitance;
+        _gsh = rsh is { } r ? 1 / r : 0;
+        _cin = cin;
+        _a0 = 1 / a0;
+        _tt = 1 / (TwoPi * gbw);
+        _t2 = secondPole is { } p2 ? 1 / (TwoPi * p2) : 0;
         var gs = _gf + _gsh;
         var cs = _cf + _cin;
         _c0 = _gf + (gs * _a0);
         _c1 = _cf + (gs * (_tt + (_a0 * _t2))) + (cs * _a0);
         _c2 = (gs * _tt * _t2) + (cs * (_tt + (_a0 * _t2)));
         _c3 = cs * _tt * _t2;
+        Valid = rf > 0 && !double.IsInfinity(rf) && gbw > 0 && a0 > 0;
     }
+
+    /// <summary>False when the model would refuse the values (the scan then reports why).</summary>
+    public bool Valid { get; }
 
     /// <summary>
     /// The figures of <paramref name="circuit"/> as the full analysis finds them, or false when this path cannot
@@ -85,13 +97,36 @@ internal readonly struct PlainLoop
     {
         figures = default;
         roots = default;
-        if (circuit.HasNetwork || !(circuit.Rf.Ohms > 0) || double.IsInfinity(circuit.Rf.Ohms)
-            || !(circuit.Gbw.Hertz > 0) || !(circuit.A0.Linear > 0))
+        return !circuit.HasNetwork
+            && new PlainLoop(
+                circuit.Rf.Ohms,
+                circuit.FeedbackCapacitance.Farads,
+                circuit.Rsh?.Ohms,
+                circuit.Cin.Farads,
+                circuit.A0.Linear,
+                circuit.Gbw.Hertz,
+                circuit.SecondPole?.Hertz).TryFigures(pointsPerDecade, hint, out figures, out roots);
+    }
+
+    /// <summary>As <see cref="TryFigures(Circuit, int, in LoopHint, out ValueTuple{double?, double?, double}, out LoopHint)"/>, for these values.</summary>
+    /// <param name="pointsPerDecade">The full scan's density.</param>
+    /// <param name="hint">Roots of a nearby point, or <see cref="LoopHint.None"/>.</param>
+    /// <param name="figures">Phase margin (degrees), bandwidth (Hz), peaking (dB).</param>
+    /// <param name="roots">ω² of the crossover and −3 dB point (0 where there is none).</param>
+    public bool TryFigures(
+        int pointsPerDecade,
+        in LoopHint hint,
+        out (double? PhaseMarginDeg, double? BandwidthHz, double PeakingDb) figures,
+        out LoopHint roots)
+    {
+        figures = default;
+        roots = default;
+        if (!Valid)
         {
             return false;
         }
 
-        var p = new PlainLoop(circuit);
+        var p = this;
         var (wLo, wHi) = p.CharacteristicRange();
         var uLo = Math.Log(wLo / 1e3);
         var uHi = Math.Log(wHi * 1e3);

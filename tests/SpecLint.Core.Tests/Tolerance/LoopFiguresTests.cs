@@ -61,11 +61,16 @@ public sealed class LoopFiguresTests
                 points++;
             }
 
+            // Monte Carlo's path: read from the point with the typical point's roots as the start, the same to the bit
+            // as the built circuit's figures.
+            var hint = TiaAnalyzer.LoopHintOf(box.Build(typical));
             var sample = new double[box.Axes.Length];
             for (var i = 0; i < 100; i++)
             {
                 MonteCarloRunner.Draw(box.Axes, 42, i, normal: false, sample);
-                AssertAgree(box.Build(sample), $"{Path.GetFileName(file)} sample {i}");
+                var full = AssertAgree(box.Build(sample), $"{Path.GetFileName(file)} sample {i}");
+                AssertSame(full, LoopMetrics.At(box, sample, hint), $"{Path.GetFileName(file)} sample {i} from the point");
+                Assert.Equal(LoopMetrics.Of(box.Build(sample), hint), LoopMetrics.At(box, sample, hint));
                 points++;
             }
         }

@@ -80,7 +80,7 @@ internal sealed class CornerSearch
 
         // Vertices are independent: analysed in parallel into their own slots, then taken in mask order.
         var metrics = new LoopMetrics[count];
-        ParallelFor(count, options.MaxDegreeOfParallelism, k => metrics[k] = LoopMetrics.Of(_box.Build(vertices[k]), _hint));
+        ParallelFor(count, options.MaxDegreeOfParallelism, k => metrics[k] = LoopMetrics.At(_box, vertices[k], _hint));
         for (var mask = 0; mask < count; mask++)
         {
             _cache.TryAdd(vertices[mask], metrics[mask]);
@@ -130,7 +130,7 @@ internal sealed class CornerSearch
     {
         if (!_cache.TryGetValue(x, out var m))
         {
-            m = LoopMetrics.Of(_box.Build(x), _hint);
+            m = LoopMetrics.At(_box, x, _hint);
             _cache[(double[])x.Clone()] = m;
         }
 

@@ -16,6 +16,20 @@ internal readonly record struct LoopMetrics(double? PhaseMarginDeg, double? Band
         return new LoopMetrics(pm, bw, peak);
     }
 
+    /// <summary>
+    /// <see cref="Of(Circuit, in LoopHint)"/> at a point of a box: a plain circuit's loop is read from the point
+    /// without building the circuit, so a Monte Carlo sample allocates nothing.
+    /// </summary>
+    public static LoopMetrics At(ToleranceBox box, ReadOnlySpan<double> x, in LoopHint hint)
+    {
+        if (box.TryPlainLoop(x, out var loop) && loop.TryFigures(20, hint, out var f, out _))
+        {
+            return new LoopMetrics(f.PhaseMarginDeg, f.BandwidthHz, f.PeakingDb);
+        }
+
+        return Of(box.Build(x), hint);
+    }
+
     /// <summary>The same figures from the full analysis (what <see cref="Of(Circuit)"/> must agree with).</summary>
     public static LoopMetrics OfFullAnalysis(Circuit circuit)
     {

@@ -46,7 +46,7 @@ internal static class MonteCarloRunner
                 for (var i = chunk * Chunk; i < end; i++)
                 {
                     Draw(axes, settings.Seed, i, normal, x);
-                    var m = LoopMetrics.Of(box.Build(x), hint);
+                    var m = LoopMetrics.At(box, x, hint);
                     pmDefined[i] = m.PhaseMarginDeg is not null;
                     // The contract counts an undefined margin as 0° in the percentiles and histogram.
                     pm[i] = m.PhaseMarginDeg ?? 0;
