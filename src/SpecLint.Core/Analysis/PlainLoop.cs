@@ -126,17 +126,17 @@ internal readonly struct PlainLoop
             return false;
         }
 
-        var p = this;
-        var (wLo, wHi) = p.CharacteristicRange();
-        var uLo = Math.Log(wLo / 1e3);
-        var uHi = Math.Log(wHi * 1e3);
-        var du = Math.Max(Math.Log(10) / pointsPerDecade, (uHi - uLo) / 100_000);
+        // The full scan's span and step, computed as it computes them.
+        var (wLo, wHi) = CharacteristicRange();
+        var uLo = Math.Log(wLo / TiaAnalyzer.ScanMargin);
+        var uHi = Math.Log(wHi * TiaAnalyzer.ScanMargin);
+        var du = Math.Max(Math.Log(10) / pointsPerDecade, (uHi - uLo) / TiaAnalyzer.MaxScanPoints);
         if (!double.IsFinite(du) || !(du > 0) || !double.IsFinite(uLo))
         {
             return false;
         }
 
-        var n = (int)Math.Min(Math.Ceiling((uHi - uLo) / du), 100_000);
+        var n = (int)Math.Min(Math.Ceiling((uHi - uLo) / du), TiaAnalyzer.MaxScanPoints);
         if (n < 6)
         {
             return false;
@@ -147,9 +147,9 @@ internal readonly struct PlainLoop
         var xMax = Math.Exp(2 * (uLo + ((n - 2) * du)));
         var guess = wLo * wHi;
 
-        if (!p.TryCrossover(hint.CrossoverOmegaSquared > 0 ? hint.CrossoverOmegaSquared : guess, xMin, xMax, out var pm, out var xc)
-            || !p.TryBandwidth(hint.BandwidthOmegaSquared > 0 ? hint.BandwidthOmegaSquared : guess, xMin, xMax, out var xb)
-            || !p.TryPeaking(uLo, du, n, xMin, xMax, Math.Exp(2 * du), out var peakingDb))
+        if (!TryCrossover(hint.CrossoverOmegaSquared > 0 ? hint.CrossoverOmegaSquared : guess, xMin, xMax, out var pm, out var xc)
+            || !TryBandwidth(hint.BandwidthOmegaSquared > 0 ? hint.BandwidthOmegaSquared : guess, xMin, xMax, out var xb)
+            || !TryPeaking(uLo, du, n, xMin, xMax, Math.Exp(2 * du), out var peakingDb))
         {
             return false;
         }

@@ -22,8 +22,8 @@ public static class TiaAnalyzer
     // converges to the last bits, finds the same roots, and phase margins near 0° keep their relative accuracy.
     private const double RootAccuracy = 1e-14;
     private const int RootIterations = 200;
-    private const double ScanMargin = 1e3;
-    private const int MaxScanPoints = 100_000;
+    internal const double ScanMargin = 1e3;
+    internal const int MaxScanPoints = 100_000;
 
     // Width in ln ω below which the crossing search stops splitting: crossings closer than this are one tangency.
     private const double CrossingResolution = 1e-9;
