@@ -1,5 +1,6 @@
 using SpecLint.Core.Files;
 using SpecLint.Core.Text;
+using SpecLint.Reporting;
 using SpecLint.Reporting.Annotations;
 using SpecLint.Reporting.Html;
 using SpecLint.Reporting.Json;
@@ -21,7 +22,7 @@ namespace SpecLint.Cli;
 /// <param name="SarifPath">SARIF 2.1.0 file, or null.</param>
 /// <param name="Title">The report title.</param>
 /// <param name="ShardData">Add the report's data to the JSON output, so 'merge' can write the report of a sharded run.</param>
-internal sealed record OutputRequest(string Format, string? ReportPath = null, string? HtmlPath = null, string? SarifPath = null, string Title = "SpecLint report", bool ShardData = false);
+internal sealed record OutputRequest(string Format, string? ReportPath = null, string? HtmlPath = null, string? SarifPath = null, string Title = ReportTitle.Default, bool ShardData = false);
 
 /// <summary>
 /// Writes a run's outputs. Files come first, each written atomically (see <see cref="AtomicFile"/>), so a
@@ -66,9 +67,7 @@ internal static class Outputs
                 output.Write(request.ShardData ? ReportDataJson.AddTo(JsonReport.Write(run), data.Value) : JsonReport.Write(run));
                 break;
             case "github":
-                // Compared with a base, only what the change introduced is annotated on the diff.
-                var annotated = run.Changes is null ? run.AllFindings : run.Specs.SelectMany(s => s.Findings).Where(run.Changes.IsNew).Concat(run.RunProblems);
-                GitHubAnnotations.Write(output, annotated.Where(f => !run.IsAccepted(f)).ToList(), Directory.GetCurrentDirectory());
+                GitHubAnnotations.Write(output, GitHubAnnotations.Of(run), Directory.GetCurrentDirectory());
                 output.WriteLine(TerminalReport.Summary(run, outputFailed: failed));
                 break;
             default:

@@ -56,6 +56,25 @@ internal sealed class CliHarness : IDisposable
         }
     }
 
+    /// <summary>Runs <paramref name="action"/> with the scratch folder as the working directory, for tests that call the engine directly.</summary>
+    public T InRoot<T>(Func<T> action)
+    {
+        ArgumentNullException.ThrowIfNull(action);
+        lock (CurrentDirectoryLock)
+        {
+            var previous = Directory.GetCurrentDirectory();
+            Directory.SetCurrentDirectory(Root);
+            try
+            {
+                return action();
+            }
+            finally
+            {
+                Directory.SetCurrentDirectory(previous);
+            }
+        }
+    }
+
     public void Dispose()
     {
         try

@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.Text.Json.Nodes;
+using SpecLint.Reporting;
 using SpecLint.Reporting.Json;
 using SpecLint.Reporting.Model;
 using SpecLint.Rules.Engine;
@@ -79,7 +80,7 @@ internal static class MergeCommand
             }
 
             var data = parts.Count > 0 ? ReportDataMerge.Merge(parts) : null;
-            const string Title = "SpecLint report";
+            const string Title = ReportTitle.Default;
             if (data is not null && parse.GetValue(report) is { } md)
             {
                 failed |= !Outputs.TryWrite("--report", () => Outputs.WriteMarkdown(data, md, Title), error);

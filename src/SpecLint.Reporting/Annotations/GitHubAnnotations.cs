@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text;
+using SpecLint.Rules.Checking;
 using SpecLint.Rules.Engine;
 
 namespace SpecLint.Reporting.Annotations;
@@ -58,6 +59,19 @@ internal static class GitHubAnnotations
             .Append(",title=").Append(EscapeProperty("SpecLint " + finding.RuleId))
             .Append("::").Append(EscapeData(Message(finding)));
         return line.ToString();
+    }
+
+    /// <summary>
+    /// What a run annotates: its findings that are not accepted (compared with a base, only the new ones and the
+    /// run's problems, so the diff shows what the change introduced), then each stale entry of the
+    /// accepted-findings file as a notice at its line there, so the change that fixed a finding also shows which
+    /// entry can go.
+    /// </summary>
+    public static IReadOnlyList<Finding> Of(CheckRun run)
+    {
+        ArgumentNullException.ThrowIfNull(run);
+        var findings = run.Changes is null ? run.AllFindings : run.Specs.SelectMany(s => s.Findings).Where(run.Changes.IsNew).Concat(run.RunProblems);
+        return [.. findings.Where(f => !run.IsAccepted(f)), .. run.Acceptance?.StaleNotes ?? []];
     }
 
     /// <summary>

@@ -44,6 +44,13 @@ internal static class ChangesJson
         }
 
         w.WriteEndArray();
+
+        // Only when there are some, so the output of every run whose base built stays as it was; outside "against",
+        // which shards of one run must share, because a shard meets only the bases of its own specs.
+        if (!changes.BaseNotes.IsEmpty)
+        {
+            Findings(w, "baseNotes", changes.BaseNotes, run);
+        }
     }
 
     private static void Findings(Utf8JsonWriter w, string name, IEnumerable<Finding> findings, CheckRun run)

@@ -26,6 +26,12 @@ internal static class ChangesMarkdown
         yield return string.Create(CultureInfo.InvariantCulture,
             $"Compared with `{MarkdownText.Cell(changes.Ref)}` (merge base `{changes.ShortBase}`): {count} spec{(count == 1 ? "" : "s")} changed{(changes.AllSpecs ? "; the configuration or the house rules changed, so every spec was re-checked" : "")}. Gate: {(changes.Gate == Gate.New ? "only new findings fail the run" : "every finding in the changed specs counts")}.");
         yield return "";
+        foreach (var n in changes.BaseNotes)
+        {
+            yield return $"> **Note** `{MarkdownText.Cell(n.File)}:{n.Line}:{n.Column}`: {MarkdownText.Cell(n.Message)}";
+            yield return "";
+        }
+
         if (count == 0)
         {
             yield break;

@@ -15,6 +15,11 @@ internal static class ChangesText
             var count = changes.Specs.Length;
             yield return string.Create(CultureInfo.InvariantCulture,
                 $"Against {changes.Ref} (merge base {changes.ShortBase}): {count} spec{(count == 1 ? "" : "s")} changed{(changes.AllSpecs ? " (configuration or house rules changed: every spec re-checked)" : "")}; gate: {(run.Gate == Gate.New ? "new findings only" : "all findings")}.");
+            foreach (var n in changes.BaseNotes)
+            {
+                yield return $"  {n.File}:{n.Line}:{n.Column}: note {n.RuleId}: {n.Message}";
+            }
+
             foreach (var c in changes.Specs)
             {
                 var from = c.PreviousFile is null ? "" : $" (from {c.PreviousFile})";
@@ -34,10 +39,9 @@ internal static class ChangesText
 
         if (run.Acceptance is { } accepted)
         {
-            foreach (var e in accepted.Stale)
+            foreach (var n in accepted.StaleNotes)
             {
-                yield return string.Create(CultureInfo.InvariantCulture,
-                    $"{accepted.File}:{e.Line}:1: note accepted-stale: '{e.Key.Rule}' at {(e.Key.Pointer.Length == 0 ? "/" : e.Key.Pointer)} of {e.Key.Spec} no longer occurs; remove the entry");
+                yield return string.Create(CultureInfo.InvariantCulture, $"{n.File}:{n.Line}:{n.Column}: note {n.RuleId}: {n.Message}");
             }
         }
     }

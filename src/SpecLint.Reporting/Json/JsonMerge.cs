@@ -85,6 +85,11 @@ internal static class JsonMerge
         {
             merged["against"] = against.DeepClone();
             merged["changes"] = ByFile(docs.SelectMany(d => d.Root["changes"]?.AsArray() ?? []));
+            var notes = ByPosition(Distinct(docs.SelectMany(d => d.Root["baseNotes"]?.AsArray() ?? [])));
+            if (notes.Count > 0)
+            {
+                merged["baseNotes"] = notes;
+            }
         }
 
         if (first.Root["accepted"] is { } accepted)
@@ -132,6 +137,15 @@ internal static class JsonMerge
 
     private static JsonArray ByFile(IEnumerable<JsonNode?> items) =>
         new([.. items.OrderBy(i => i?["file"]?.GetValue<string>() ?? "", StringComparer.Ordinal).Select(i => i?.DeepClone())]);
+
+    /// <summary>Findings in the order <c>ChangeReport.BaseNotes</c> has them: file, line, column, message.</summary>
+    private static JsonArray ByPosition(JsonArray items) =>
+        new([.. items
+            .OrderBy(i => i?["file"]?.GetValue<string>() ?? "", StringComparer.Ordinal)
+            .ThenBy(i => i?["line"]?.GetValue<int>() ?? 0)
+            .ThenBy(i => i?["column"]?.GetValue<int>() ?? 0)
+            .ThenBy(i => i?["message"]?.GetValue<string>() ?? "", StringComparer.Ordinal)
+            .Select(i => i?.DeepClone())]);
 
     private static JsonArray Distinct(IEnumerable<JsonNode?> items)
     {

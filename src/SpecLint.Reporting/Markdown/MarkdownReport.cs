@@ -28,7 +28,7 @@ internal sealed class MarkdownReport
     /// <param name="Title">The first heading.</param>
     /// <param name="GeneratedAt">A time to print in the run context, or null for none (reruns stay identical).</param>
     /// <param name="Extras">Per-spec Markdown appended after each spec's metrics (plots), by spec file.</param>
-    public sealed record Options(string Title = "SpecLint report", DateTimeOffset? GeneratedAt = null, IReadOnlyDictionary<string, string>? Extras = null);
+    public sealed record Options(string Title = ReportTitle.Default, DateTimeOffset? GeneratedAt = null, IReadOnlyDictionary<string, string>? Extras = null);
 
     /// <summary>The tool version printed in the run context.</summary>
     public static string ToolVersion =>

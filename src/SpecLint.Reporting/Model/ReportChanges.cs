@@ -11,7 +11,11 @@ namespace SpecLint.Reporting.Model;
 /// <param name="AllSpecs">True when a configuration or house-rule change re-checked every spec.</param>
 /// <param name="Gate">Which findings fail the run.</param>
 /// <param name="Specs">The changed specs, ordinal by file.</param>
-internal sealed record ReportChanges(string Ref, string ShortBase, bool AllSpecs, Gate Gate, ImmutableArray<ReportChange> Specs);
+internal sealed record ReportChanges(string Ref, string ShortBase, bool AllSpecs, Gate Gate, ImmutableArray<ReportChange> Specs)
+{
+    /// <summary>Notes about the base itself (its house rules did not build), by file and line.</summary>
+    public ImmutableArray<Finding> BaseNotes { get; init; } = [];
+}
 
 /// <summary>One changed spec as the report shows it.</summary>
 /// <param name="File">The head path (the base path for a deleted spec).</param>

@@ -39,7 +39,7 @@ internal sealed record ReportData(
         ReportChanges? changes = run.Changes is { } c
             ? new ReportChanges(c.Ref, c.ShortBase, c.AllSpecs, run.Gate, [.. c.Specs.Select(s => new ReportChange(
                 s.File, s.PreviousFile, s.Name, s.Status, s.Findings.New, s.Findings.Resolved, s.Findings.Unchanged.Length, s.BaseProblems,
-                [.. DeltaRows.For(s)], () => ChangeCharts(s.Before?.Analysis, s.After?.Analysis, s.Name)))])
+                [.. DeltaRows.For(s)], () => ChangeCharts(s.Before?.Analysis, s.After?.Analysis, s.Name)))]) { BaseNotes = c.BaseNotes }
             : null;
         return new ReportData([.. run.Specs.Select(s => Spec(s, run.FailOn))], run.RunProblems, run.FailOn, run.ConfigFiles, [.. houseRules], run.ExitCode, changes);
     }

@@ -116,6 +116,11 @@ internal static class ReportDataJson
             }
 
             w.WriteEndArray();
+            if (!changes.BaseNotes.IsEmpty)
+            {
+                WriteFindings(w, "baseNotes", changes.BaseNotes);
+            }
+
             w.WriteEndObject();
         }
 
@@ -249,7 +254,10 @@ internal static class ReportDataJson
 
     private static ReportChanges Changes(JsonObject c) =>
         new(Text(c, "ref"), Text(c, "base"), c["everySpec"]?.GetValue<bool>() ?? throw Damaged("everySpec"), Text(c, "gate") == "new" ? Gate.New : Gate.All,
-            [.. Array(c, "specs").Select(Change)]);
+            [.. Array(c, "specs").Select(Change)])
+        {
+            BaseNotes = c["baseNotes"] is JsonArray ? Findings(c, "baseNotes") : [],
+        };
 
     private static ReportChange Change(JsonNode? node)
     {

@@ -23,7 +23,14 @@ internal static class ReportDataMerge
         }
 
         var changes = first.Changes is { } c
-            ? c with { Specs = [.. shards.SelectMany(s => s.Changes?.Specs ?? []).OrderBy(s => s.File, StringComparer.Ordinal)] }
+            ? c with
+            {
+                Specs = [.. shards.SelectMany(s => s.Changes?.Specs ?? []).OrderBy(s => s.File, StringComparer.Ordinal)],
+
+                // Each shard meets the bases of its own specs only; the unsharded run orders them by position.
+                BaseNotes = [.. shards.SelectMany(s => s.Changes?.BaseNotes ?? []).Distinct()
+                    .OrderBy(n => n.File, StringComparer.Ordinal).ThenBy(n => n.Line).ThenBy(n => n.Column).ThenBy(n => n.Message, StringComparer.Ordinal)],
+            }
             : null;
         return new ReportData(
             [.. shards.SelectMany(s => s.Specs).OrderBy(s => s.File, StringComparer.Ordinal)],

@@ -15,6 +15,19 @@ namespace SpecLint.Rules.Accepting;
 /// <param name="Stale">Entries whose spec was checked and that match none of its findings.</param>
 internal sealed record Acceptance(string File, ImmutableArray<AcceptedEntry> Entries, IReadOnlySet<Finding> Covered, ImmutableArray<AcceptedEntry> Stale)
 {
+    /// <summary>
+    /// The id a stale entry is reported under (docs/engine-findings.md). Not one of <see cref="RuleIds.EngineIds"/>:
+    /// it is about the accepted-findings file, never fails a run, and nothing can waive or configure it.
+    /// </summary>
+    public const string StaleId = "accepted-stale";
+
+    /// <summary>
+    /// Each stale entry as a note at its line of the accepted-findings file, for outputs that show findings
+    /// (the terminal, workflow annotations). They stay out of the run's findings so they never change its exit code.
+    /// </summary>
+    public IEnumerable<Finding> StaleNotes => Stale.Select(e => new Finding(StaleId, Severity.Note, File, "", Math.Max(1, e.Line), 1,
+        $"'{e.Key.Rule}' at {(e.Key.Pointer.Length == 0 ? "/" : e.Key.Pointer)} of {e.Key.Spec} no longer occurs; remove the entry"));
+
     /// <summary>True when an entry covers <paramref name="finding"/>.</summary>
     public bool Covers(Finding finding) => Covered.Contains(finding);
 

@@ -10,8 +10,8 @@ namespace SpecLint.Rules.Changes;
 
 /// <summary>
 /// <c>check --against</c>: checks the spec files a change touched (every spec when configuration or house rules
-/// changed), checks each one's base version read from git with the base's configuration, and sorts the findings
-/// into new, resolved and unchanged. Deleted specs are checked at the base so their findings show as resolved.
+/// changed), checks each one's base version read from git with the base's configuration and the base's house rules
+/// (see <see cref="BaseConfigs"/>), and sorts the findings into new, resolved and unchanged. Deleted specs are checked at the base so their findings show as resolved.
 /// </summary>
 internal static class ChangeCheck
 {
@@ -30,7 +30,7 @@ internal static class ChangeCheck
         }, tolerances);
 
         var baseOptions = options with { Catalog = run.Catalog, Progress = null };
-        var configs = new BaseConfigs(changes, options.ConfigPath);
+        var configs = new BaseConfigs(changes, options, run.Catalog);
         var specs = new List<SpecChange>();
         foreach (var head in run.Specs)
         {
@@ -56,7 +56,10 @@ internal static class ChangeCheck
             specs.Add(new SpecChange(ChangeStatus.Deleted, display, null, before, null, resolved, problems));
         }
 
-        var report = new ChangeReport(changes.Ref, changes.MergeBase, [.. specs.OrderBy(s => s.File, StringComparer.Ordinal)], everySpec);
+        var report = new ChangeReport(changes.Ref, changes.MergeBase, [.. specs.OrderBy(s => s.File, StringComparer.Ordinal)], everySpec)
+        {
+            BaseNotes = configs.Notes,
+        };
         return run with { RunProblems = [.. run.RunProblems.Select(p => Reword(p, deleted))], Changes = report, Gate = gate };
     }
 
@@ -93,14 +96,16 @@ internal static class ChangeCheck
             return null;
         }
 
-        return CheckRunner.CheckSpec(spec, configs.For(display), options, tolerances);
+        var (config, catalog) = configs.For(display);
+        return CheckRunner.CheckSpec(spec, config, options with { Catalog = catalog }, tolerances);
     }
 
-    /// <summary>Deleted spec files that the paths and include globs would have selected.</summary>
+    /// <summary>Deleted spec files that the paths and include globs would have selected (house-rule cases excepted, as a check of the tree does).</summary>
     private static IEnumerable<(FileChange Change, string Display)> DeletedSpecs(GitChangeSet changes, CheckOptions options, Func<string, bool>? select)
     {
         var configFile = options.ConfigPath ?? RepoConfigLoader.FindFor(Path.Combine(Directory.GetCurrentDirectory(), "_"));
-        var include = (configFile is null ? RepoConfig.Default : RepoConfigLoader.Load(configFile).Config).Include.Select(g => new GlobPattern(g)).ToList();
+        var config = configFile is null ? RepoConfig.Default : RepoConfigLoader.Load(configFile).Config;
+        var include = config.Include.Select(g => new GlobPattern(g)).ToList();
         IReadOnlyList<string> roots = options.Paths.Count > 0
             ? options.Paths
             : [configFile is null ? "." : Path.GetDirectoryName(Path.GetFullPath(configFile))!];
@@ -119,7 +124,9 @@ internal static class ChangeCheck
                 var relative = Path.GetRelativePath(rootFull, full).Replace('\\', '/');
                 return !relative.StartsWith("..", StringComparison.Ordinal) && !Path.IsPathRooted(relative) && include.Any(g => g.IsMatch(relative));
             });
-            if (selected && (select?.Invoke(display) ?? true))
+            // A deleted house rule takes its cases with it; they were never checked as specs, so they are not resolved ones.
+            var isCase = options.HouseRules is not null && HouseRuleCases.IsCase(full, config);
+            if (selected && !isCase && (select?.Invoke(display) ?? true))
             {
                 yield return (change, display);
             }
@@ -133,35 +140,5 @@ internal static class ChangeCheck
         return problem.RuleId == RuleIds.SpecInvalid && gone.Change is not null
             ? problem with { Message = "this spec was deleted since the merge base; its findings are listed as resolved. Name its folder, or leave it off the command line" }
             : problem;
-    }
-
-    /// <summary>The configuration each base version is judged by: the base version of the head's configuration file.</summary>
-    private sealed class BaseConfigs(GitChangeSet changes, string? explicitPath)
-    {
-        private readonly Dictionary<string, RepoConfig> _cache = new(StringComparer.Ordinal);
-
-        public RepoConfig For(string specDisplayPath)
-        {
-            var file = explicitPath ?? RepoConfigLoader.FindFor(specDisplayPath)
-                ?? RepoConfigLoader.FindFor(Path.Combine(Directory.GetCurrentDirectory(), "_"));
-            if (file is null)
-            {
-                return RepoConfig.Default;
-            }
-
-            var full = Path.GetFullPath(file);
-            if (_cache.TryGetValue(full, out var cached))
-            {
-                return cached;
-            }
-
-            var repoPath = changes.RepoPath(full);
-            var bytes = repoPath is null ? null : changes.BaseBytes(repoPath);
-            var config = repoPath is null ? RepoConfigLoader.Load(full).Config
-                : bytes is null ? RepoConfig.Default
-                : RepoConfigLoader.LoadText(System.Text.Encoding.UTF8.GetString(bytes), full).Config;
-            _cache[full] = config;
-            return config;
-        }
     }
 }

@@ -12,6 +12,12 @@ internal sealed record ChangeReport(string Ref, string MergeBase, ImmutableArray
 {
     private readonly HashSet<Finding> _new = Specs.SelectMany(s => s.Findings.New).ToHashSet();
 
+    /// <summary>
+    /// Notes about the base itself, at positions in its files: its house rules could not be built, so base versions
+    /// were judged by the head's. They never fail the run: the change under review did not cause them.
+    /// </summary>
+    public ImmutableArray<Finding> BaseNotes { get; init; } = [];
+
     /// <summary>True when <paramref name="finding"/> is on the head only.</summary>
     public bool IsNew(Finding finding) => _new.Contains(finding);
 

@@ -62,6 +62,11 @@ public sealed class AcceptTests
         var lines = File.ReadAllLines(cli.Path_("speclint-accepted.json"));
         var entryLine = Array.FindIndex(lines, l => l.Contains("\"rule\": \"phase-margin\"", StringComparison.Ordinal));
         Assert.Contains($"speclint-accepted.json:{entryLine}:1: note accepted-stale: 'phase-margin'", fixedRun.Out, StringComparison.Ordinal);
+
+        // In a workflow the same entry is a notice at that line of the accepted file; it does not fail the run.
+        var annotated = cli.Run("check", "hw", "--nominal-only", "--accepted", "speclint-accepted.json", "--format", "github");
+        Assert.Equal(0, annotated.Exit);
+        Assert.Contains($"::notice file=speclint-accepted.json,line={entryLine},col=1,title=SpecLint accepted-stale::'phase-margin'", annotated.Out, StringComparison.Ordinal);
     }
 
     [Fact]
