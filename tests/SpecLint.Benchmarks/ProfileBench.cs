@@ -72,15 +72,31 @@ internal static class ProfileBench
         PerSample(specs, withMc);
     }
 
-    /// <summary>One Monte Carlo sample: the circuit at a point and its loop figures.</summary>
+    /// <summary>
+    /// One Monte Carlo sample: the circuit at a point and its loop figures (started from the typical point's roots,
+    /// as Monte Carlo does), separately for plain channels and for channels with a switch, wiper or electrode.
+    /// </summary>
     private static void PerSample(Core.Spec.Model.TiaSpec[] specs, ToleranceOptions options)
     {
         var boxes = specs.Select(s => new ToleranceBox(s, options)).Where(b => !b.Axes.IsEmpty).ToArray();
+        foreach (var network in (bool[])[false, true])
+        {
+            var group = boxes.Where(b => b.Build(b.TypicalPoint()).HasNetwork == network).ToArray();
+            if (group.Length > 0)
+            {
+                PerSample(group, network ? "switched/electrode" : "plain");
+            }
+        }
+    }
+
+    private static void PerSample(ToleranceBox[] boxes, string what)
+    {
         const int Samples = 2000;
         double buildBytes = 0, loopBytes = 0, buildTicks = 0, loopTicks = 0;
         foreach (var box in boxes)
         {
             var x = new double[box.Axes.Length];
+            var hint = TiaAnalyzer.LoopHintOf(box.Build(box.TypicalPoint()));
             for (var pass = 0; pass < 2; pass++)
             {
                 long b0 = GC.GetAllocatedBytesForCurrentThread(), b1 = 0, t1 = 0, t0 = Stopwatch.GetTimestamp();
@@ -95,7 +111,7 @@ internal static class ProfileBench
                 b1 = GC.GetAllocatedBytesForCurrentThread();
                 foreach (var c in circuits)
                 {
-                    LoopMetrics.Of(c);
+                    LoopMetrics.Of(c, hint);
                 }
 
                 if (pass == 1)
@@ -108,8 +124,32 @@ internal static class ProfileBench
             }
         }
 
+        // Monte Carlo's own path: the loop read from the point, no circuit built for a plain channel.
+        double pointBytes = 0, pointTicks = 0;
+        foreach (var box in boxes)
+        {
+            var x = new double[box.Axes.Length];
+            var hint = TiaAnalyzer.LoopHintOf(box.Build(box.TypicalPoint()));
+            for (var pass = 0; pass < 2; pass++)
+            {
+                long b0 = GC.GetAllocatedBytesForCurrentThread(), t0 = Stopwatch.GetTimestamp();
+                for (var i = 0; i < Samples; i++)
+                {
+                    MonteCarloRunner.Draw(box.Axes, 1, i, normal: false, x);
+                    LoopMetrics.At(box, x, hint);
+                }
+
+                if (pass == 1)
+                {
+                    pointBytes += GC.GetAllocatedBytesForCurrentThread() - b0;
+                    pointTicks += Stopwatch.GetTimestamp() - t0;
+                }
+            }
+        }
+
         var n = (double)Samples * boxes.Length;
         var us = 1e6 / Stopwatch.Frequency;
-        Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"  per Monte Carlo sample: draw + build {buildTicks * us / n:0.000} µs, {(buildBytes / n) - 8:0} B (less the test's own array slot); loop figures {loopTicks * us / n:0.000} µs, {loopBytes / n:0} B"));
+        Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"  per Monte Carlo sample, {what}, as Monte Carlo runs it (draw, loop from the point): {pointTicks * us / n:0.000} µs, {pointBytes / n:0} B"));
+        Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"  per Monte Carlo sample, {what} ({boxes.Length} specs): draw + build {buildTicks * us / n:0.000} µs, {(buildBytes / n) - 8:0} B (less the test's own array slot); loop figures {loopTicks * us / n:0.000} µs, {loopBytes / n:0} B"));
     }
 }

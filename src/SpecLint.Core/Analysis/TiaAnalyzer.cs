@@ -10,7 +10,7 @@ namespace SpecLint.Core.Analysis;
 /// </summary>
 /// <remarks>
 /// Method: a log-spaced scan over 10⁻³·(lowest) .. 10³·(highest) characteristic frequency brackets every
-/// |T| = 1 crossing and the −3 dB fall, and MathNet's Brent solver refines each bracket to 1e-12 in ln f.
+/// |T| = 1 crossing and the −3 dB fall, and MathNet's Brent solver refines each bracket to 1e-14 in ln f.
 /// Between scan points, bounds on how fast |T| can change decide where a pair of crossings could hide, and
 /// only there is the interval split further, so no crossing slips between points.
 /// The phase comes from summed pole and zero angles, so it is unwrapped from DC by construction (docs/references.md
@@ -18,10 +18,12 @@ namespace SpecLint.Core.Analysis;
 /// </remarks>
 public static class TiaAnalyzer
 {
-    private const double RootAccuracy = 1e-12;
+    // Near the rounding of ln ω itself (about 4e-15 at ln ω ≈ 20), so the polynomial fast path (PlainLoop), which
+    // converges to the last bits, finds the same roots, and phase margins near 0° keep their relative accuracy.
+    private const double RootAccuracy = 1e-14;
     private const int RootIterations = 200;
-    private const double ScanMargin = 1e3;
-    private const int MaxScanPoints = 100_000;
+    internal const double ScanMargin = 1e3;
+    internal const int MaxScanPoints = 100_000;
 
     // Width in ln ω below which the crossing search stops splitting: crossings closer than this are one tangency.
     private const double CrossingResolution = 1e-9;
@@ -103,6 +105,32 @@ public static class TiaAnalyzer
     /// <see cref="Analyze(Circuit, AnalysisOptions)"/> without noise finds them, for corners and Monte Carlo.
     /// </summary>
     /// <remarks>
+    /// A plain circuit goes through <see cref="PlainLoop"/> (no scan, no allocation); when that declines, and for
+    /// a circuit with a network, through <see cref="ScanLoopFigures"/>.
+    /// </remarks>
+    /// <param name="circuit">The operating point.</param>
+    /// <param name="pointsPerDecade">Scan points per decade, as <see cref="AnalysisOptions.ScanPointsPerDecade"/>.</param>
+    internal static (double? PhaseMarginDeg, double? BandwidthHz, double PeakingDb) LoopFigures(Circuit circuit, int pointsPerDecade = 20) =>
+        LoopFigures(circuit, LoopHint.None, pointsPerDecade);
+
+    /// <summary><see cref="LoopFigures(Circuit, int)"/> with the roots of a nearby point to start from.</summary>
+    /// <param name="circuit">The operating point.</param>
+    /// <param name="hint">Roots of a nearby point (<see cref="LoopHintOf"/>), or <see cref="LoopHint.None"/>.</param>
+    /// <param name="pointsPerDecade">Scan points per decade, as <see cref="AnalysisOptions.ScanPointsPerDecade"/>.</param>
+    internal static (double? PhaseMarginDeg, double? BandwidthHz, double PeakingDb) LoopFigures(Circuit circuit, in LoopHint hint, int pointsPerDecade = 20) =>
+        PlainLoop.TryFigures(circuit, pointsPerDecade, hint, out var figures, out _)
+            ? figures
+            : ScanLoopFigures(circuit, pointsPerDecade);
+
+    /// <summary>Roots of <paramref name="circuit"/> for <see cref="LoopFigures(Circuit, in LoopHint, int)"/> at points near it.</summary>
+    /// <param name="circuit">The operating point, typically a tolerance box's typical one.</param>
+    internal static LoopHint LoopHintOf(Circuit circuit) =>
+        PlainLoop.TryFigures(circuit, 20, LoopHint.None, out _, out var roots) ? roots : LoopHint.None;
+
+    /// <summary>
+    /// <see cref="LoopFigures(Circuit, int)"/> by the full analysis's scan, for any circuit.
+    /// </summary>
+    /// <remarks>
     /// The same scan, crossing search and refinements as the full analysis, so its guarantees hold (no pair of
     /// crossings hides between scan points), with the work they do not need left out: the scan compares squared
     /// magnitudes instead of their logarithms (taken only where the slope bound needs them, next to |T| = 1), the
@@ -112,7 +140,7 @@ public static class TiaAnalyzer
     /// </remarks>
     /// <param name="circuit">The operating point.</param>
     /// <param name="pointsPerDecade">Scan points per decade, as <see cref="AnalysisOptions.ScanPointsPerDecade"/>.</param>
-    internal static (double? PhaseMarginDeg, double? BandwidthHz, double PeakingDb) LoopFigures(Circuit circuit, int pointsPerDecade = 20)
+    internal static (double? PhaseMarginDeg, double? BandwidthHz, double PeakingDb) ScanLoopFigures(Circuit circuit, int pointsPerDecade = 20)
     {
         var model = new TiaModel(circuit);
         var zt0Sq = model.TransimpedanceMagnitudeSquared(0);

@@ -24,9 +24,13 @@ internal sealed class CornerSearch
     private readonly ToleranceBox _box;
     private readonly Dictionary<double[], LoopMetrics> _cache = new(PointComparer.Instance);
 
+    // Every point of the box starts its root search from the typical point's roots.
+    private readonly LoopHint _hint;
+
     public CornerSearch(ToleranceBox box)
     {
         _box = box;
+        _hint = TiaAnalyzer.LoopHintOf(box.Build(box.TypicalPoint()));
     }
 
     /// <summary>The number of axes whose vertices were enumerated in the last <see cref="Run"/>.</summary>
@@ -76,7 +80,7 @@ internal sealed class CornerSearch
 
         // Vertices are independent: analysed in parallel into their own slots, then taken in mask order.
         var metrics = new LoopMetrics[count];
-        ParallelFor(count, options.MaxDegreeOfParallelism, k => metrics[k] = LoopMetrics.Of(_box.Build(vertices[k])));
+        ParallelFor(count, options.MaxDegreeOfParallelism, k => metrics[k] = LoopMetrics.At(_box, vertices[k], _hint));
         for (var mask = 0; mask < count; mask++)
         {
             _cache.TryAdd(vertices[mask], metrics[mask]);
@@ -126,7 +130,7 @@ internal sealed class CornerSearch
     {
         if (!_cache.TryGetValue(x, out var m))
         {
-            m = LoopMetrics.Of(_box.Build(x));
+            m = LoopMetrics.At(_box, x, _hint);
             _cache[(double[])x.Clone()] = m;
         }
 

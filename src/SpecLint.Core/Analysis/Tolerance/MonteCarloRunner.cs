@@ -35,6 +35,8 @@ internal static class MonteCarloRunner
         var peak = new double[n];
         var normal = settings.Distribution == MonteCarloDistribution.Normal;
         var axes = box.Axes;
+        // Every sample starts its root search from the typical point's roots: the same start on any thread.
+        var hint = TiaAnalyzer.LoopHintOf(box.Build(box.TypicalPoint()));
         var parallel = new ParallelOptions { MaxDegreeOfParallelism = options.MaxDegreeOfParallelism };
         try
         {
@@ -44,7 +46,7 @@ internal static class MonteCarloRunner
                 for (var i = chunk * Chunk; i < end; i++)
                 {
                     Draw(axes, settings.Seed, i, normal, x);
-                    var m = LoopMetrics.Of(box.Build(x));
+                    var m = LoopMetrics.At(box, x, hint);
                     pmDefined[i] = m.PhaseMarginDeg is not null;
                     // The contract counts an undefined margin as 0° in the percentiles and histogram.
                     pm[i] = m.PhaseMarginDeg ?? 0;

@@ -94,6 +94,68 @@ internal sealed class ToleranceBox
     /// <summary>The circuit at a point of the box (one value per axis).</summary>
     public Circuit Build(ReadOnlySpan<double> x)
     {
+        var v = Read(x);
+        return _typical with
+        {
+            Rf = new Resistance(v.Rf),
+            // The dielectric's temperature change and Cf's own tolerance are separate factors (references.md §4 item 13).
+            Cf = new Capacitance(v.Cf * v.CfFactor),
+            Cpar = new Capacitance(v.Cpar),
+            SensorCapacitance = new Capacitance(v.Sensor),
+            StrayCapacitance = new Capacitance(v.Stray),
+            Rsh = v.Rsh is { } r ? new Resistance(r) : null,
+            Gbw = new Frequency(v.Gbw),
+            SecondPole = v.SecondPole is { } p ? new Frequency(p) : null,
+            Temperature = new Temperature(v.Kelvin),
+            Ib = new Current(IbAt(v.Kelvin)),
+            SupplyPositive = new Voltage(v.SupplyPositive),
+            SupplyNegative = new Voltage(v.SupplyNegative),
+            Idark = new Current(v.Idark),
+            Vbias = new Voltage(v.Vbias),
+            SeriesResistance = new Resistance(v.SeriesResistance),
+        };
+    }
+
+    /// <summary>
+    /// The loop of the circuit at a point without building it, for Monte Carlo samples; false when that circuit has
+    /// a switch, wiper, unselected branches or an access resistance (<see cref="Build"/> serves those).
+    /// </summary>
+    /// <remarks>The same values, summed in the same order, as the built circuit's, so the same figures to the bit.</remarks>
+    public bool TryPlainLoop(ReadOnlySpan<double> x, out PlainLoop loop)
+    {
+        var v = Read(x);
+        var c = _typical;
+        if (c.FeedbackSeriesResistance.Ohms > 0 || !c.OffBranches.IsDefaultOrEmpty || v.SeriesResistance > 0)
+        {
+            loop = default;
+            return false;
+        }
+
+        var cfb = new Capacitance(v.Cf * v.CfFactor) + new Capacitance(v.Cpar);
+        var cin = new Capacitance(v.Sensor) + c.CommonModeCapacitance + c.DifferentialCapacitance + new Capacitance(v.Stray);
+        loop = new PlainLoop(v.Rf, cfb.Farads, v.Rsh, cin.Farads, c.A0.Linear, v.Gbw, v.SecondPole);
+        return true;
+    }
+
+    private readonly record struct PointValues(
+        double Rf,
+        double Cf,
+        double CfFactor,
+        double Cpar,
+        double Sensor,
+        double Stray,
+        double? Rsh,
+        double Gbw,
+        double? SecondPole,
+        double Kelvin,
+        double SupplyPositive,
+        double SupplyNegative,
+        double Idark,
+        double Vbias,
+        double SeriesResistance);
+
+    private PointValues Read(ReadOnlySpan<double> x)
+    {
         var c = _typical;
         double rf = c.Rf.Ohms, cf = c.Cf.Farads, cfFactor = 1, cpar = c.Cpar.Farads, cs = c.SensorCapacitance.Farads;
         double stray = c.StrayCapacitance.Farads, gbw = c.Gbw.Hertz, kelvin = c.Temperature.Kelvin;
@@ -124,25 +186,7 @@ internal sealed class ToleranceBox
             }
         }
 
-        return c with
-        {
-            Rf = new Resistance(rf),
-            // The dielectric's temperature change and Cf's own tolerance are separate factors (references.md §4 item 13).
-            Cf = new Capacitance(cf * cfFactor),
-            Cpar = new Capacitance(cpar),
-            SensorCapacitance = new Capacitance(cs),
-            StrayCapacitance = new Capacitance(stray),
-            Rsh = rsh is { } r ? new Resistance(r) : null,
-            Gbw = new Frequency(gbw),
-            SecondPole = p2 is { } p ? new Frequency(p) : null,
-            Temperature = new Temperature(kelvin),
-            Ib = new Current(IbAt(kelvin)),
-            SupplyPositive = new Voltage(vpos),
-            SupplyNegative = new Voltage(vneg),
-            Idark = new Current(idark),
-            Vbias = new Voltage(vbias),
-            SeriesResistance = new Resistance(rs),
-        };
+        return new PointValues(rf, cf, cfFactor, cpar, cs, stray, rsh, gbw, p2, kelvin, vpos, vneg, idark, vbias, rs);
     }
 
     /// <summary>The corner record of a point.</summary>
