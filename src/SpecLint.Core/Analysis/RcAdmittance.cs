@@ -15,12 +15,34 @@ internal sealed class RcAdmittance
     public RcAdmittance(IEnumerable<RcBranch> branches)
     {
         _branches = [.. branches.Where(b => b.G > 0 || b.C > 0)];
-        Poles = [.. _branches.Select(b => b.Pole).OfType<double>().Order()];
+
+        // Built once per Monte Carlo sample of a network: plain loops, not a query pipeline.
+        var count = 0;
+        foreach (var b in _branches)
+        {
+            count += b.Pole is null ? 0 : 1;
+        }
+
+        var poles = new double[count];
+        count = 0;
+        foreach (var b in _branches)
+        {
+            if (b.Pole is { } p)
+            {
+                poles[count++] = p;
+            }
+        }
+
+        Array.Sort(poles);
+        Poles = poles;
         Zeros = FindZeros();
     }
 
     /// <summary>The branches.</summary>
     public IReadOnlyList<RcBranch> Branches => _branches;
+
+    /// <summary>The branches, in the order <see cref="At"/> adds them, without an enumerator to allocate.</summary>
+    internal ReadOnlySpan<RcBranch> BranchSpan => _branches;
 
     /// <summary>Poles as σ &gt; 0 (Y → ∞ at s = −σ), ascending.</summary>
     public double[] Poles { get; }
@@ -44,7 +66,19 @@ internal sealed class RcAdmittance
     }
 
     /// <summary>Y(0).</summary>
-    public double Dc => _branches.Sum(b => b.Dc);
+    public double Dc
+    {
+        get
+        {
+            var sum = 0.0;
+            foreach (var b in _branches)
+            {
+                sum += b.Dc;
+            }
+
+            return sum;
+        }
+    }
 
     /// <summary>Numerator and common denominator of Y(s), ascending powers of s.</summary>
     public (double[] Num, double[] Den) Polynomials()

@@ -170,9 +170,10 @@ public static class TiaAnalyzer
         for (var i = 1; i <= n; i++)
         {
             w = Math.Exp(uLo + (i * du));
+            double z2;
             if (marginDeg is null)
             {
-                var t2 = model.LoopGainMagnitudeSquared(w);
+                (var t2, z2) = model.LoopAndTransimpedanceSquared(w);
                 var changes = (prevT2 > 1) != (t2 > 1);
                 if (changes || (prevT2 >= nearLow && prevT2 <= nearHigh && t2 >= nearLow && t2 <= nearHigh))
                 {
@@ -186,8 +187,11 @@ public static class TiaAnalyzer
 
                 prevT2 = t2;
             }
+            else
+            {
+                z2 = model.TransimpedanceMagnitudeSquared(w);
+            }
 
-            var z2 = model.TransimpedanceMagnitudeSquared(w);
             if (bandwidthU is null && prevZ2 > targetSq && z2 <= targetSq)
             {
                 bandwidthU = Refine(

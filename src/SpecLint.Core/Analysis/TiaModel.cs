@@ -330,6 +330,24 @@ public sealed class TiaModel
         return 1 / (yf + (ysum * InverseA(w)));
     }
 
+    /// <summary>
+    /// <see cref="LoopGainMagnitudeSquared"/> and <see cref="TransimpedanceMagnitudeSquared"/> together, equal to
+    /// each to the last bit: a network's admittances are evaluated once for both (the loop-only scan's hot path).
+    /// </summary>
+    internal (double LoopSq, double TransimpedanceSq) LoopAndTransimpedanceSquared(double w)
+    {
+        if (_network is not { } n)
+        {
+            return (LoopGainMagnitudeSquared(w), TransimpedanceMagnitudeSquared(w));
+        }
+
+        var (yf, ysum) = n.AdmittancesAtOmega(w);
+        var ia = InverseA(w);
+        return (
+            yf.MagnitudeSquared() / (ysum.MagnitudeSquared() * ia.MagnitudeSquared()),
+            n.SignalTransfer(w).MagnitudeSquared() / (yf + (ysum * ia)).MagnitudeSquared());
+    }
+
     /// <summary>|Zt(jω)|², with the complex division written out (hot path of the bandwidth scan).</summary>
     internal double TransimpedanceMagnitudeSquared(double w)
     {

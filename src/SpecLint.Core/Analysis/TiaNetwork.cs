@@ -63,6 +63,29 @@ internal sealed class TiaNetwork
     /// <summary>Yf + Yin.</summary>
     public RcAdmittance Sum { get; }
 
+    /// <summary>
+    /// Yf(jω) and (Yf + Yin)(jω) in one pass: the sum of every branch continues from the feedback branches' sum, in
+    /// the order <see cref="Sum"/> adds them, so both equal <see cref="Feedback"/> and <see cref="Sum"/> to the last
+    /// bit for the cost of one.
+    /// </summary>
+    public (Complex Feedback, Complex Sum) AdmittancesAtOmega(double w)
+    {
+        var s = new Complex(0, w);
+        Complex yf = 0;
+        foreach (var b in Feedback.BranchSpan)
+        {
+            yf += b.At(s);
+        }
+
+        var ysum = yf;
+        foreach (var b in Input.BranchSpan)
+        {
+            ysum += b.At(s);
+        }
+
+        return (yf, ysum);
+    }
+
     /// <summary>D(jω) = Yf + (Yf + Yin)/A; Zt = 1/D.</summary>
     public Complex Denominator(double w, Complex inverseA) => Feedback.AtOmega(w) + (Sum.AtOmega(w) * inverseA);
 

@@ -202,6 +202,37 @@ public sealed class LoopFiguresTests
     }
 
     [Fact]
+    public void A_networks_loop_gain_and_transimpedance_from_one_evaluation_equal_each_to_the_last_bit()
+    {
+        // The loop-only scan evaluates a network's admittances once for |T|² and |Zt|²; the sums must be added in
+        // the same order as the separate functions, so that the scan's decisions cannot change (common practice).
+        var random = new Random(20261207);
+        double LogUniform(double lo, double hi) => lo * Math.Pow(hi / lo, random.NextDouble());
+        for (var i = 0; i < 200; i++)
+        {
+            var off = ImmutableArray.CreateBuilder<OffBranch>();
+            for (var k = random.Next(1, 4); k > 0; k--)
+            {
+                off.Add(new OffBranch(new Resistance(LogUniform(1e3, 1e10)), new Capacitance(LogUniform(1e-13, 1e-10)), new Capacitance(LogUniform(1e-13, 1e-11))));
+            }
+
+            var circuit = RandomPlain(random) with
+            {
+                FeedbackSeriesResistance = new Resistance(LogUniform(1, 1e3)),
+                SeriesResistance = new Resistance(random.NextDouble() < 0.5 ? 0 : LogUniform(10, 1e6)),
+                OffBranches = off.ToImmutable(),
+            };
+            var model = new TiaModel(circuit);
+            for (var w = 1.0; w < 1e12; w *= 1.7)
+            {
+                var (loop, zt) = model.LoopAndTransimpedanceSquared(w);
+                Assert.Equal(model.LoopGainMagnitudeSquared(w), loop);
+                Assert.Equal(model.TransimpedanceMagnitudeSquared(w), zt);
+            }
+        }
+    }
+
+    [Fact]
     public void The_comparison_fails_on_a_figure_off_by_more_than_the_tolerance()
     {
         Assert.True(Close(100, 100 * (1 + 1e-12), 0));
