@@ -11,6 +11,7 @@ namespace SpecLint.Core.Analysis;
 internal sealed class RcAdmittance
 {
     private readonly RcBranch[] _branches;
+    private double[]? _zeros;
 
     public RcAdmittance(IEnumerable<RcBranch> branches)
     {
@@ -35,7 +36,6 @@ internal sealed class RcAdmittance
 
         Array.Sort(poles);
         Poles = poles;
-        Zeros = FindZeros();
     }
 
     /// <summary>The branches.</summary>
@@ -48,7 +48,8 @@ internal sealed class RcAdmittance
     public double[] Poles { get; }
 
     /// <summary>Zeros as σ ≥ 0 (Y = 0 at s = −σ), ascending; a pole that two branches share also holds a zero.</summary>
-    public double[] Zeros { get; }
+    /// <remarks>Found on first use: a Monte Carlo sample of a network builds three admittances and needs the zeros of two.</remarks>
+    public double[] Zeros => _zeros ??= FindZeros();
 
     /// <summary>Y(jω).</summary>
     public Complex AtOmega(double w) => At(new Complex(0, w));
