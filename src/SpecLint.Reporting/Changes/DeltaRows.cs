@@ -39,20 +39,17 @@ internal static class DeltaRows
             return For(change.MetricsBefore, change.MetricsAfter);
         }
 
-        // A setting whose figures are all the same on both sides shows nothing, not even the worst-corner row that a
-        // single-gain spec always shows once corners ran (its head cell names the corner, so the cells never match).
+        // A setting whose figures are all the same on both sides shows nothing.
         return settings.Where(s => !Equals(s.MetricsBefore, s.MetricsAfter)).SelectMany(s => For(s.MetricsBefore, s.MetricsAfter).Select(r => r with { Setting = s.Name, SettingStatus = s.Status }));
     }
 
-    private static IEnumerable<DeltaRow> For(MetricSnapshot? b, MetricSnapshot? a)
+    /// <summary>The rows of one pair of snapshots (a spec with one gain, or one setting).</summary>
+    internal static IEnumerable<DeltaRow> For(MetricSnapshot? b, MetricSnapshot? a)
     {
         var rows = new[]
         {
             Row("Phase margin", b?.PhaseMarginDeg, a?.PhaseMarginDeg, MetricRows.Deg, Difference("°", "0.0")),
-            Row("Phase margin, worst corner", b?.PhaseMarginDegMin, a?.PhaseMarginDegMin, MetricRows.Deg, Difference("°", "0.0")) with
-            {
-                After = a?.PhaseMarginDegMin is { } w ? MetricRows.Deg(w) + (a.PhaseMarginMinCorner is { Length: > 0 } c ? $" ({c})" : "") : None,
-            },
+            Row(WorstCorner, b?.PhaseMarginDegMin, a?.PhaseMarginDegMin, MetricRows.Deg, Difference("°", "0.0")),
             Row("Bandwidth", b?.BandwidthHz, a?.BandwidthHz, v => MetricRows.Q(v, Dimension.Frequency), Relative),
             Row("Peaking", b?.PeakingDb, a?.PeakingDb, v => Text($"{v:0.00} dB"), Difference(" dB", "0.00")),
             Row("Input noise, rms", b?.InputNoiseRmsA, a?.InputNoiseRmsA, v => MetricRows.Q(v, Dimension.Current), Relative),
@@ -60,8 +57,14 @@ internal static class DeltaRows
             Row("Output high", b?.OutputMaxV, a?.OutputMaxV, v => MetricRows.Q(v, Dimension.Voltage), (x, y) => Signed(MetricRows.Q(y - x, Dimension.Voltage), y - x)),
             Row("Yield", b?.Yield, a?.Yield, v => Text($"{100 * v:0.0} %"), (x, y) => Signed(Text($"{Math.Abs(100 * (y - x)):0.0} points"), y - x)),
         };
-        return rows.Where(r => r.Before != r.After);
+        // Rows whose value did not move are left out; the head's worst corner is named only after that comparison,
+        // so an unchanged margin does not show as a change because one side names its corner.
+        return rows.Where(r => r.Before != r.After).Select(r => r.Metric == WorstCorner && a?.PhaseMarginDegMin is { } w
+            ? r with { After = MetricRows.Deg(w) + (a.PhaseMarginMinCorner is { Length: > 0 } c ? $" ({c})" : "") }
+            : r);
     }
+
+    private const string WorstCorner = "Phase margin, worst corner";
 
     private static DeltaRow Row(string metric, double? before, double? after, Func<double, string> format, Func<double, double, string> change) =>
         new(metric, before is { } x ? format(x) : None, after is { } y ? format(y) : None, before is { } p && after is { } q ? change(p, q) : "");
