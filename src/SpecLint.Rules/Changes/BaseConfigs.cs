@@ -18,6 +18,7 @@ namespace SpecLint.Rules.Changes;
 internal sealed class BaseConfigs(GitChangeSet changes, CheckOptions options, RuleCatalog headCatalog)
 {
     private readonly Dictionary<string, (RepoConfig Config, RuleCatalog Catalog)> _cache = new(StringComparer.Ordinal);
+    private readonly Dictionary<string, Func<string, string>> _shownAs = new(StringComparer.Ordinal);
     private readonly List<Finding> _notes = [];
 
     /// <summary>
@@ -27,17 +28,34 @@ internal sealed class BaseConfigs(GitChangeSet changes, CheckOptions options, Ru
     public ImmutableArray<Finding> Notes => [.. _notes
         .OrderBy(n => n.File, StringComparer.Ordinal).ThenBy(n => n.Line).ThenBy(n => n.Column).ThenBy(n => n.Message, StringComparer.Ordinal)];
 
+    /// <summary>
+    /// A base outcome as a reviewer reads it: a finding of a base-only house rule (one that threw, say) names the
+    /// rule's file in the repository, not the temporary folder it was built from and that is gone by now.
+    /// </summary>
+    public SpecOutcome Shown(string specDisplayPath, SpecOutcome outcome)
+    {
+        ArgumentNullException.ThrowIfNull(outcome);
+        if (ConfigFile(specDisplayPath) is not { } full || !_shownAs.TryGetValue(full, out var shownAs))
+        {
+            return outcome;
+        }
+
+        ImmutableArray<Finding> Map(ImmutableArray<Finding> findings) => [.. findings.Select(f => shownAs(f.File) is var file && file != f.File ? f with { File = file } : f)];
+        return outcome with
+        {
+            Findings = Map(outcome.Findings),
+            Settings = [.. outcome.Settings.Select(s => s with { Findings = Map(s.Findings) })],
+        };
+    }
+
     /// <summary>The configuration and rules for the base version of the spec shown as <paramref name="specDisplayPath"/>.</summary>
     public (RepoConfig Config, RuleCatalog Catalog) For(string specDisplayPath)
     {
-        var file = options.ConfigPath ?? RepoConfigLoader.FindFor(specDisplayPath)
-            ?? RepoConfigLoader.FindFor(Path.Combine(Directory.GetCurrentDirectory(), "_"));
-        if (file is null)
+        if (ConfigFile(specDisplayPath) is not { } full)
         {
             return (RepoConfig.Default, headCatalog);
         }
 
-        var full = Path.GetFullPath(file);
         if (_cache.TryGetValue(full, out var cached))
         {
             return cached;
@@ -46,6 +64,14 @@ internal sealed class BaseConfigs(GitChangeSet changes, CheckOptions options, Ru
         var result = Load(full);
         _cache[full] = result;
         return result;
+    }
+
+    /// <summary>The full path of the configuration file that governs a spec, or null when there is none.</summary>
+    private string? ConfigFile(string specDisplayPath)
+    {
+        var file = options.ConfigPath ?? RepoConfigLoader.FindFor(specDisplayPath)
+            ?? RepoConfigLoader.FindFor(Path.Combine(Directory.GetCurrentDirectory(), "_"));
+        return file is null ? null : Path.GetFullPath(file);
     }
 
     private (RepoConfig Config, RuleCatalog Catalog) Load(string full)
@@ -69,8 +95,13 @@ internal sealed class BaseConfigs(GitChangeSet changes, CheckOptions options, Ru
             return (config, headCatalog);
         }
 
-        var set = BaseHouseRules.Load(changes, source, repoPath, text, out var notes);
+        var set = BaseHouseRules.Load(changes, source, repoPath, text, out var notes, out var shownAs);
         _notes.AddRange(notes);
+        if (set is not null)
+        {
+            _shownAs[full] = shownAs;
+        }
+
         return (config, set is null ? headCatalog : options.Catalog.With(set));
     }
 

@@ -21,7 +21,15 @@ internal static class BaseHouseRules
     /// The base's house rules of the configuration at <paramref name="configRepoPath"/> (its base text is
     /// <paramref name="configText"/>), or null with <paramref name="notes"/> saying why they could not be built.
     /// </summary>
-    public static HouseRuleSet? Load(GitChangeSet changes, IHouseRuleSource source, string configRepoPath, string configText, out ImmutableArray<Finding> notes)
+    public static HouseRuleSet? Load(GitChangeSet changes, IHouseRuleSource source, string configRepoPath, string configText, out ImmutableArray<Finding> notes) =>
+        Load(changes, source, configRepoPath, configText, out notes, out _);
+
+    /// <summary>
+    /// As <see cref="Load(GitChangeSet, IHouseRuleSource, string, string, out ImmutableArray{Finding})"/>, with
+    /// <paramref name="shownAs"/> mapping a file of the temporary folder (where a base rule that throws is reported)
+    /// to the rule's place in the repository, as a reviewer finds it.
+    /// </summary>
+    public static HouseRuleSet? Load(GitChangeSet changes, IHouseRuleSource source, string configRepoPath, string configText, out ImmutableArray<Finding> notes, out Func<string, string> shownAs)
     {
         ArgumentNullException.ThrowIfNull(changes);
         ArgumentNullException.ThrowIfNull(source);
@@ -30,9 +38,12 @@ internal static class BaseHouseRules
         var folder = slash < 0 ? "" : configRepoPath[..slash];
         var prefix = RecheckScope.FolderPrefix(folder);
         string? temp = null;
+        shownAs = file => file;
         try
         {
             temp = Directory.CreateTempSubdirectory("speclint-base-rules-").FullName;
+            var folderOfTemp = temp;
+            shownAs = file => Shown(file, folderOfTemp, prefix) is var repoPath && repoPath != file ? GitChangeSet.Display(changes.Root, repoPath) : file;
             var configFile = Path.Combine(temp, configRepoPath[(slash + 1)..]);
             File.WriteAllText(configFile, configText, new UTF8Encoding(false));
             var config = RepoConfigLoader.LoadText(configText, configFile).Config;

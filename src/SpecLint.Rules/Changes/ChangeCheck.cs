@@ -97,7 +97,7 @@ internal static class ChangeCheck
         }
 
         var (config, catalog) = configs.For(display);
-        return CheckRunner.CheckSpec(spec, config, options with { Catalog = catalog }, tolerances);
+        return configs.Shown(display, CheckRunner.CheckSpec(spec, config, options with { Catalog = catalog }, tolerances));
     }
 
     /// <summary>Deleted spec files that the paths and include globs would have selected (house-rule cases excepted, as a check of the tree does).</summary>

@@ -88,6 +88,29 @@ public sealed class BaseHouseRulesTests
     }
 
     [Fact]
+    public void A_base_only_rule_that_throws_is_reported_at_its_file_in_the_repository_not_the_temporary_folder()
+    {
+        using var cli = Repository();
+        Assert.Equal(0, cli.Run("new-rule", "guard-ring-note").Exit);
+        var file = cli.Path_(RulePath);
+        File.WriteAllText(file, File.ReadAllText(file).Replace(
+            "var rf = context.Spec.Feedback.Resistance.Typ;",
+            "var rf = context.Spec.Feedback.Resistance.Typ;\n        if (rf.Ohms > 0) { throw new InvalidOperationException(\"base rule fails\"); }",
+            StringComparison.Ordinal));
+        GitRepo.Commit(cli, "a house rule that throws");
+        GitRepo.Git(cli.Root, "checkout", "-q", "-b", "drop");
+        GitRepo.Git(cli.Root, "rm", "-q", "-r", "house-rules");
+        GitRepo.Commit(cli, "no house rules");
+
+        var (_, output, error) = cli.Run("check", "--against", "main", "--nominal-only", "--format", "json");
+
+        using var doc = JsonDocument.Parse(output);
+        var resolved = Change(doc, "hw/a.tia.yaml").GetProperty("findings").GetProperty("resolved").EnumerateArray()
+            .Single(f => f.GetProperty("rule").GetString() == "house-rule-failed");
+        Assert.True(resolved.GetProperty("file").GetString() == RulePath, error + output);
+    }
+
+    [Fact]
     public void Rules_the_change_leaves_alone_are_built_once_and_a_changed_rule_once_more_for_the_base()
     {
         using var cli = Repository();
