@@ -109,29 +109,42 @@ internal sealed class RcAdmittance
 
     private double[] FindZeros()
     {
-        var zeros = new List<double>();
+        // One zero per gap between poles and at most one above the last: sized once, trimmed only when the last is absent.
+        var zeros = new double[Poles.Length + 1];
+        var count = 0;
         var lower = 0.0;
         var dc = Dc;
+        var grows = false;
+        foreach (var b in _branches)
+        {
+            grows |= b.GrowsAtInfinity;
+        }
+
         for (var i = 0; i <= Poles.Length; i++)
         {
             var upper = i < Poles.Length ? Poles[i] : double.PositiveInfinity;
             if (i == 0 && dc <= 0)
             {
-                zeros.Add(0);
+                zeros[count++] = 0;
             }
             else if (i < Poles.Length)
             {
-                zeros.Add(ZeroBetween(i == 0 ? 0 : lower, upper));
+                zeros[count++] = ZeroBetween(i == 0 ? 0 : lower, upper);
             }
-            else if (_branches.Any(b => b.GrowsAtInfinity))
+            else if (grows)
             {
-                zeros.Add(ZeroAbove(lower));
+                zeros[count++] = ZeroAbove(lower);
             }
 
             lower = upper;
         }
 
-        return [.. zeros];
+        if (count < zeros.Length)
+        {
+            Array.Resize(ref zeros, count);
+        }
+
+        return zeros;
     }
 
     /// <summary>The single zero in (a, b) where Y(−σ) falls from above 0 to below it, bracketed in ln σ.</summary>

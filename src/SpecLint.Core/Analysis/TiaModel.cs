@@ -184,10 +184,10 @@ public sealed class TiaModel
         Take(wt);
         if (_network is { } n)
         {
-            foreach (var x in n.CharacteristicOmegas())
-            {
-                Take(x);
-            }
+            // Only the extremes matter here; Take ignores the (+∞, 0) of a network without corners.
+            var (low, high) = n.CharacteristicBounds();
+            Take(low);
+            Take(high);
         }
 
         Take(wt * _invA0);

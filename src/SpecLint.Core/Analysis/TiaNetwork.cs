@@ -106,21 +106,42 @@ internal sealed class TiaNetwork
     /// <summary>Slope terms of ln|T| that fall with ω: the zeros of Yf + Yin.</summary>
     public double FallingSlope(double w) => SlopeSum(Sum.Zeros, w);
 
-    /// <summary>Every corner of the networks and of Hs, in rad/s (zeros at the origin left out).</summary>
-    public IEnumerable<double> CharacteristicOmegas()
+    /// <summary>
+    /// The lowest and highest corner of the networks and of Hs in rad/s (Yf's zeros and poles, the zeros of Yf + Yin,
+    /// Yin's poles, Hs's pole; zeros at the origin left out), or (+∞, 0) when there is none. Only the extremes set the
+    /// scan's span, so no list is built: every Monte Carlo sample of a network asks.
+    /// </summary>
+    public (double Low, double High) CharacteristicBounds()
     {
-        foreach (var x in Feedback.Zeros.Concat(Feedback.Poles).Concat(Sum.Zeros).Concat(Input.Poles))
+        var lo = double.PositiveInfinity;
+        var hi = 0.0;
+        void Take(double[] values)
         {
-            if (x > 0)
+            foreach (var x in values)
             {
-                yield return x;
+                if (x > 0 && !double.IsInfinity(x))
+                {
+                    lo = Math.Min(lo, x);
+                    hi = Math.Max(hi, x);
+                }
             }
         }
 
+        Take(Feedback.Zeros);
+        Take(Feedback.Poles);
+        Take(Sum.Zeros);
+        Take(Input.Poles);
         if (_rs > 0 && _cd > 0)
         {
-            yield return (1 + (_rs * _gsh)) / (_rs * _cd);
+            var x = (1 + (_rs * _gsh)) / (_rs * _cd);
+            if (!double.IsInfinity(x) && x > 0)
+            {
+                lo = Math.Min(lo, x);
+                hi = Math.Max(hi, x);
+            }
         }
+
+        return (lo, hi);
     }
 
     /// <summary>
