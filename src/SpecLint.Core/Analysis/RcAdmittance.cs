@@ -17,15 +17,9 @@ internal sealed class RcAdmittance
     {
         _branches = [.. branches.Where(b => b.G > 0 || b.C > 0)];
 
-        // Built once per Monte Carlo sample of a network: plain loops, not a query pipeline.
+        // Built once per Monte Carlo sample of a network: a plain loop, not a query pipeline.
+        var poles = new double[_branches.Length];
         var count = 0;
-        foreach (var b in _branches)
-        {
-            count += b.Pole is null ? 0 : 1;
-        }
-
-        var poles = new double[count];
-        count = 0;
         foreach (var b in _branches)
         {
             if (b.Pole is { } p)
@@ -34,6 +28,7 @@ internal sealed class RcAdmittance
             }
         }
 
+        Array.Resize(ref poles, count);
         Array.Sort(poles);
         Poles = poles;
     }
@@ -178,7 +173,7 @@ internal sealed class RcAdmittance
             }
         }
 
-        return Bisect(lo, hi);
+        return ZeroInBracket(lo, hi);
     }
 
     private double ZeroAbove(double a)
@@ -200,7 +195,7 @@ internal sealed class RcAdmittance
             hi *= 10;
         }
 
-        return Bisect(lo, hi);
+        return ZeroInBracket(lo, hi);
     }
 
     /// <summary>
@@ -209,7 +204,7 @@ internal sealed class RcAdmittance
     /// or more of bisection; a step that does not shrink the bracket by a quarter is replaced by a bisection, so it
     /// can never be slower than bisection by more than that.
     /// </summary>
-    private double Bisect(double lo, double hi)
+    private double ZeroInBracket(double lo, double hi)
     {
         double u0 = Math.Log(lo), u1 = Math.Log(hi);
         double f0 = OnAxis(lo), f1 = OnAxis(hi);

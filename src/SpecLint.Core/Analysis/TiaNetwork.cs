@@ -115,30 +115,26 @@ internal sealed class TiaNetwork
     {
         var lo = double.PositiveInfinity;
         var hi = 0.0;
-        void Take(double[] values)
+        void Take(double x)
         {
-            foreach (var x in values)
-            {
-                if (x > 0 && !double.IsInfinity(x))
-                {
-                    lo = Math.Min(lo, x);
-                    hi = Math.Max(hi, x);
-                }
-            }
-        }
-
-        Take(Feedback.Zeros);
-        Take(Feedback.Poles);
-        Take(Sum.Zeros);
-        Take(Input.Poles);
-        if (_rs > 0 && _cd > 0)
-        {
-            var x = (1 + (_rs * _gsh)) / (_rs * _cd);
-            if (!double.IsInfinity(x) && x > 0)
+            if (x > 0 && !double.IsInfinity(x))
             {
                 lo = Math.Min(lo, x);
                 hi = Math.Max(hi, x);
             }
+        }
+
+        foreach (var corners in (ReadOnlySpan<double[]>)[Feedback.Zeros, Feedback.Poles, Sum.Zeros, Input.Poles])
+        {
+            foreach (var x in corners)
+            {
+                Take(x);
+            }
+        }
+
+        if (_rs > 0 && _cd > 0)
+        {
+            Take((1 + (_rs * _gsh)) / (_rs * _cd));
         }
 
         return (lo, hi);

@@ -24,8 +24,7 @@ internal static class ChangeSettingPlots
         var frequencies = analyses.SelectMany(SpecPlots.Sweep).Distinct().Order().ToArray();
         var curves = settings.Select(s => (Before: s.Before is null ? default : ChangePlots.Curves(s.Before, frequencies), After: s.After is null ? default : ChangePlots.Curves(s.After, frequencies))).ToList();
         // Markers (crossover, phase margin, noise band) follow the first setting on the head, as in the settings chart of a plain check.
-        var lead = settings.Select(s => s.After).OfType<AnalysisResult>().FirstOrDefault() ?? analyses[0];
-        var leadCurves = ChangePlots.Curves(lead, frequencies);
+        var (lead, leadCurves) = Lead(settings, curves);
 
         var loop = LoopGainChart.Build(frequencies, leadCurves.MagnitudeDb, leadCurves.PhaseDeg, lead.Crossover?.Hertz, lead.PhaseMargin?.Degrees,
             $"{specName}: loop gain of each setting, base (dotted) and this change");
@@ -59,5 +58,22 @@ internal static class ChangeSettingPlots
         }
 
         return [("change-loop-gain", loop with { Series = [.. magnitude, .. phase] }), ("change-noise", noise with { Series = [.. density] })];
+    }
+
+    /// <summary>The first setting's head analysis (else the first base one) and the curves already computed for it.</summary>
+    private static (AnalysisResult Analysis, (double[] MagnitudeDb, double[] PhaseDeg, double[] Noise) Curves) Lead(
+        IReadOnlyList<(string Name, AnalysisResult? Before, AnalysisResult? After)> settings,
+        List<((double[] MagnitudeDb, double[] PhaseDeg, double[] Noise) Before, (double[] MagnitudeDb, double[] PhaseDeg, double[] Noise) After)> curves)
+    {
+        for (var i = 0; i < settings.Count; i++)
+        {
+            if (settings[i].After is { } after)
+            {
+                return (after, curves[i].After);
+            }
+        }
+
+        var first = Enumerable.Range(0, settings.Count).First(i => settings[i].Before is not null);
+        return (settings[first].Before!, curves[first].Before);
     }
 }

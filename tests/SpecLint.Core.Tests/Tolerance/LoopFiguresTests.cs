@@ -83,23 +83,10 @@ public sealed class LoopFiguresTests
     {
         // Log-uniform values over ranges wider than any spec uses; every figure kind appears (checked below).
         var random = new Random(20261202);
-        double LogUniform(double lo, double hi) => lo * Math.Pow(hi / lo, random.NextDouble());
         int withMargin = 0, withoutMargin = 0, peaking = 0;
         for (var i = 0; i < 3000; i++)
         {
-            var gbw = LogUniform(1e4, 1e9);
-            var circuit = new Circuit
-            {
-                Rf = new Resistance(LogUniform(1e2, 1e11)),
-                Cf = new Capacitance(random.NextDouble() < 0.2 ? 0 : LogUniform(1e-14, 1e-9)),
-                Cpar = new Capacitance(LogUniform(1e-15, 1e-12)),
-                SensorCapacitance = new Capacitance(LogUniform(1e-13, 1e-8)),
-                CommonModeCapacitance = new Capacitance(LogUniform(1e-13, 1e-11)),
-                Rsh = random.NextDouble() < 0.3 ? null : new Resistance(LogUniform(1e2, 1e13)),
-                A0 = Gain.FromDecibels(40 + (random.NextDouble() * 130)),
-                Gbw = new Frequency(gbw),
-                SecondPole = random.NextDouble() < 0.3 ? null : new Frequency(gbw * LogUniform(0.3, 100)),
-            };
+            var circuit = RandomPlain(random);
             var full = AssertAgree(circuit, string.Create(CultureInfo.InvariantCulture, $"random circuit {i}"));
             withMargin += full.PhaseMarginDeg is null ? 0 : 1;
             withoutMargin += full.PhaseMarginDeg is null ? 1 : 0;
@@ -171,17 +158,12 @@ public sealed class LoopFiguresTests
         for (var i = 0; i < 150; i++)
         {
             var plain = RandomPlain(random);
-            var off = ImmutableArray.CreateBuilder<OffBranch>();
-            for (var k = random.Next(0, 3); k > 0; k--)
-            {
-                off.Add(new OffBranch(new Resistance(LogUniform(1e3, 1e10)), new Capacitance(LogUniform(1e-13, 1e-10)), new Capacitance(LogUniform(1e-13, 1e-11))));
-            }
-
+            var off = RandomOffBranches(random, 0, 3);
             var nominal = plain with
             {
                 FeedbackSeriesResistance = new Resistance(random.NextDouble() < 0.3 ? 0 : LogUniform(1, 1e3)),
                 SeriesResistance = new Resistance(random.NextDouble() < 0.5 ? 0 : LogUniform(10, 1e6)),
-                OffBranches = off.ToImmutable(),
+                OffBranches = off,
             };
             var hint = TiaAnalyzer.LoopHintOf(plain);
             for (var k = 0; k < 4; k++)
@@ -210,17 +192,12 @@ public sealed class LoopFiguresTests
         double LogUniform(double lo, double hi) => lo * Math.Pow(hi / lo, random.NextDouble());
         for (var i = 0; i < 200; i++)
         {
-            var off = ImmutableArray.CreateBuilder<OffBranch>();
-            for (var k = random.Next(1, 4); k > 0; k--)
-            {
-                off.Add(new OffBranch(new Resistance(LogUniform(1e3, 1e10)), new Capacitance(LogUniform(1e-13, 1e-10)), new Capacitance(LogUniform(1e-13, 1e-11))));
-            }
-
+            var off = RandomOffBranches(random, 1, 4);
             var circuit = RandomPlain(random) with
             {
                 FeedbackSeriesResistance = new Resistance(LogUniform(1, 1e3)),
                 SeriesResistance = new Resistance(random.NextDouble() < 0.5 ? 0 : LogUniform(10, 1e6)),
-                OffBranches = off.ToImmutable(),
+                OffBranches = off,
             };
             var model = new TiaModel(circuit);
             for (var w = 1.0; w < 1e12; w *= 1.7)
@@ -239,6 +216,19 @@ public sealed class LoopFiguresTests
         Assert.False(Close(100, 100 * (1 + 1e-10), 0));
         Assert.True(Close(0, 1e-13, PeakingNoiseDb));
         Assert.False(Close(0, 1e-9, PeakingNoiseDb));
+    }
+
+    /// <summary>Between <paramref name="min"/> and <paramref name="maxExclusive"/> − 1 unselected branches behind open switches.</summary>
+    private static ImmutableArray<OffBranch> RandomOffBranches(Random random, int min, int maxExclusive)
+    {
+        double LogUniform(double lo, double hi) => lo * Math.Pow(hi / lo, random.NextDouble());
+        var off = ImmutableArray.CreateBuilder<OffBranch>();
+        for (var k = random.Next(min, maxExclusive); k > 0; k--)
+        {
+            off.Add(new OffBranch(new Resistance(LogUniform(1e3, 1e10)), new Capacitance(LogUniform(1e-13, 1e-10)), new Capacitance(LogUniform(1e-13, 1e-11))));
+        }
+
+        return off.ToImmutable();
     }
 
     /// <summary>Log-uniform values over ranges wider than any spec uses.</summary>

@@ -30,7 +30,7 @@ internal sealed class CornerSearch
     public CornerSearch(ToleranceBox box)
     {
         _box = box;
-        _hint = TiaAnalyzer.LoopHintOf(box.Build(box.TypicalPoint()));
+        _hint = box.Hint;
     }
 
     /// <summary>The number of axes whose vertices were enumerated in the last <see cref="Run"/>.</summary>

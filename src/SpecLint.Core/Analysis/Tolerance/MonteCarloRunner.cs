@@ -36,7 +36,7 @@ internal static class MonteCarloRunner
         var normal = settings.Distribution == MonteCarloDistribution.Normal;
         var axes = box.Axes;
         // Every sample starts its root search from the typical point's roots: the same start on any thread.
-        var hint = TiaAnalyzer.LoopHintOf(box.Build(box.TypicalPoint()));
+        var hint = box.Hint;
         var parallel = new ParallelOptions { MaxDegreeOfParallelism = options.MaxDegreeOfParallelism };
         try
         {

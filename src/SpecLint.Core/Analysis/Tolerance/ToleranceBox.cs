@@ -13,6 +13,7 @@ namespace SpecLint.Core.Analysis.Tolerance;
 internal sealed class ToleranceBox
 {
 
+    private LoopHint? _hint;
     private readonly Circuit _typical;
     private readonly double _ibAt25;
     private readonly double _doublingKelvin;
@@ -91,6 +92,12 @@ internal sealed class ToleranceBox
     /// <summary>The typical point of the box.</summary>
     public double[] TypicalPoint() => [.. Axes.Select(a => a.Typ)];
 
+    /// <summary>
+    /// The typical point's loop roots, where the corner search and every Monte Carlo sample start their own root
+    /// search; found once per box.
+    /// </summary>
+    public LoopHint Hint => _hint ??= TiaAnalyzer.LoopHintOf(Build(TypicalPoint()));
+
     /// <summary>The circuit at a point of the box (one value per axis).</summary>
     public Circuit Build(ReadOnlySpan<double> x)
     {
@@ -123,11 +130,16 @@ internal sealed class ToleranceBox
     /// <remarks>The same values, summed in the same order, as the built circuit's, so the same figures to the bit.</remarks>
     public bool TryPlainLoop(ReadOnlySpan<double> x, out PlainLoop loop)
     {
-        var v = Read(x);
         var c = _typical;
-        if (c.FeedbackSeriesResistance.Ohms > 0 || !c.OffBranches.IsDefaultOrEmpty || v.SeriesResistance > 0)
+        loop = default;
+        if (c.FeedbackSeriesResistance.Ohms > 0 || !c.OffBranches.IsDefaultOrEmpty)
         {
-            loop = default;
+            return false;
+        }
+
+        var v = Read(x);
+        if (v.SeriesResistance > 0)
+        {
             return false;
         }
 
